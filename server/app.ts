@@ -1,0 +1,58 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { toNodeHandler } from 'better-auth/node';
+import express from 'express';
+import helmet from 'helmet';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { adminRoutes } from './routes/admin.routes';
+import type { AppDeps } from './routes/deps';
+import { invitationRoutes } from './routes/invitations.routes';
+import { meRoutes } from './routes/me.routes';
+import { musicianRoutes } from './routes/musicians.routes';
+import { studentRoutes } from './routes/students.routes';
+
+export type { AppDeps } from './routes/deps';
+
+/** Builds the Express app; never listens (server/index.ts does). */
+export function createApp(deps: AppDeps): express.Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // react-native-web writes style attributes at run time.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+        },
+      },
+    }),
+  );
+
+  // better-auth reads the raw body, so it is mounted before express.json().
+  app.all('/api/auth/{*splat}', toNodeHandler(deps.auth));
+  app.use(express.json({ limit: '100kb' }));
+
+  app.get('/api/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  app.use('/api/me', meRoutes(deps));
+  app.use('/api/invitations', invitationRoutes(deps));
+  app.use('/api/musicians', musicianRoutes(deps));
+  app.use('/api/students', studentRoutes(deps));
+  app.use('/api/admin', adminRoutes(deps));
+  app.use('/api', apiNotFound);
+
+  if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) {
+    const webDir = path.resolve(deps.webDir);
+    app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+    // The web export is a single-page app: every other path gets index.html and the router takes over.
+    app.get('/{*splat}', (_req, res) => {
+      res.sendFile(path.join(webDir, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}

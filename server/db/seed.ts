@@ -1,0 +1,57 @@
+import { randomUUID } from 'node:crypto';
+import { count } from 'drizzle-orm';
+import type { Role } from '../../shared/schemas/role';
+import type { Auth } from '../auth';
+import type { Db } from './client';
+import { clearanceShares, musicians, user } from './schema';
+import { DEMO_PASSWORD, demoScenario } from './demo-scenario';
+
+export interface SeededAccount {
+  role: Role;
+  name: string;
+  email: string;
+}
+
+/** Seeds the invented demo scenario into an empty database; does nothing otherwise. */
+export async function seedDemo(db: Db, auth: Auth, now: Date): Promise<{ password: string; accounts: SeededAccount[] } | null> {
+  const users = db.select({ n: count() }).from(user).get();
+  if ((users?.n ?? 0) > 0) return null;
+
+  const scenario = demoScenario(now);
+  const ids = new Map<string, string>();
+  const accounts: SeededAccount[] = [];
+  for (const person of scenario.people) {
+    const created = await auth.api.createUser({
+      body: { email: person.email, password: DEMO_PASSWORD, name: person.name, role: person.role },
+    });
+    ids.set(person.key, created.user.id);
+    accounts.push({ role: person.role, name: person.name, email: person.email });
+  }
+  const idOf = (key: string) => {
+    const id = ids.get(key);
+    if (!id) throw new Error(`Demo scenario names an unknown person: ${key}`);
+    return id;
+  };
+
+  db.transaction((tx) => {
+    for (const entry of scenario.musicians) {
+      const musicianId = randomUUID();
+      const person = scenario.people.find((p) => p.key === entry.person);
+      tx.insert(musicians)
+        .values({
+          id: musicianId,
+          clinicianId: idOf(entry.clinician),
+          userId: idOf(entry.person),
+          name: person?.name ?? entry.person,
+          email: person?.email ?? '',
+          instrument: entry.instrument,
+          createdAt: now,
+        })
+        .run();
+      for (const teacher of entry.sharedWith) {
+        tx.insert(clearanceShares).values({ id: randomUUID(), musicianId, teacherId: idOf(teacher), createdAt: now }).run();
+      }
+    }
+  });
+  return { password: DEMO_PASSWORD, accounts };
+}

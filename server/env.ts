@@ -1,0 +1,35 @@
+import { z } from 'zod';
+
+/** The environment, parsed once. Every setting has a development default so `npm start` needs none. */
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  HOST: z.string().default('0.0.0.0'),
+  PUBLIC_URL: z.url().optional(),
+  DATABASE_PATH: z.string().default('data/ritorno.db'),
+  UPLOAD_DIR: z.string().default('data/uploads'),
+  WEB_DIR: z.string().default('dist'),
+  AUTH_SECRET: z.string().min(32).default('development-only-secret-change-me-0123456789'),
+  SMTP_URL: z.url().optional(),
+  MAIL_FROM: z.string().default('Ritorno <no-reply@ritorno.local>'),
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  SEED_DEMO: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((value) => value === 'true'),
+});
+
+export type Env = z.infer<typeof EnvSchema> & { PUBLIC_URL: string };
+
+export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = EnvSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  const env = parsed.data;
+  if (env.NODE_ENV === 'production' && env.AUTH_SECRET.startsWith('development-only')) {
+    throw new Error('Set AUTH_SECRET (32+ random characters) in production.');
+  }
+  return { ...env, PUBLIC_URL: env.PUBLIC_URL ?? `http://localhost:${env.PORT}` };
+}

@@ -1,0 +1,60 @@
+import type { Server } from 'node:http';
+import { createApp } from './app';
+import { createAuth } from './auth';
+import { migrateDatabase, openDatabase } from './db/client';
+import { seedDemo } from './db/seed';
+import { parseEnv } from './env';
+import { startFakeSmtp, type FakeSmtp } from './lib/fake-smtp';
+import { createSmtpMailer } from './lib/mailer';
+
+async function main() {
+  const env = parseEnv();
+  const db = openDatabase(env.DATABASE_PATH);
+  migrateDatabase(db);
+
+  let fakeSmtp: FakeSmtp | undefined;
+  let smtpUrl = env.SMTP_URL;
+  if (!smtpUrl) {
+    fakeSmtp = await startFakeSmtp(env.FAKE_SMTP_PORT);
+    smtpUrl = `smtp://127.0.0.1:${fakeSmtp.port}`;
+  }
+  const mailer = createSmtpMailer(smtpUrl, env.MAIL_FROM);
+  const auth = createAuth({ db, env, mailer });
+
+  const seeded = env.SEED_DEMO ? await seedDemo(db, auth, new Date()) : null;
+
+  const app = createApp({
+    db,
+    auth,
+    mailer,
+    env,
+    now: () => new Date(),
+    devMailbox: fakeSmtp ? () => fakeSmtp.messages() : undefined,
+    webDir: env.WEB_DIR,
+  });
+  const server: Server = app.listen(env.PORT, env.HOST, () => {
+    console.log(`\nRitorno is running at ${env.PUBLIC_URL}`);
+    console.log(fakeSmtp ? `Mail: local fake SMTP on port ${fakeSmtp.port}; read it as the admin under Mailbox.` : 'Mail: sent through SMTP_URL.');
+    if (seeded) {
+      console.log(`\nDemo accounts (password for all: ${seeded.password}):`);
+      for (const account of seeded.accounts) console.log(`  ${account.role.padEnd(10)} ${account.email}  (${account.name})`);
+    }
+  });
+
+  const shutdown = (signal: string) => {
+    console.log(`\n${signal}: closing.`);
+    server.close(() => {
+      void fakeSmtp?.close();
+      db.$client.close();
+      process.exit(0);
+    });
+    setTimeout(() => process.exit(1), 5000).unref();
+  };
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});

@@ -1,0 +1,45 @@
+import type { OutgoingMail } from './mailer';
+
+/** Plain-text e-mails; every one says who sent it and why, and carries no clinical detail. */
+export function invitationMail(input: {
+  to: string;
+  name: string;
+  role: 'musician' | 'teacher';
+  invitedBy: string;
+  link: string;
+  expiresAt: Date;
+}): OutgoingMail {
+  const purpose =
+    input.role === 'musician'
+      ? 'to follow the graded return-to-playing plan your clinician prepares for you'
+      : "to see which repertoire your students are cleared to play and for how long";
+  return {
+    to: input.to,
+    subject: `${input.invitedBy} invited you to Ritorno`,
+    text: [
+      `Hello ${input.name},`,
+      '',
+      `${input.invitedBy} invited you to Ritorno ${purpose}.`,
+      'Open this link to set your password and sign in:',
+      input.link,
+      '',
+      `The link works once and expires on ${input.expiresAt.toUTCString()}.`,
+      'If you did not expect this e-mail, you can ignore it.',
+    ].join('\n'),
+  };
+}
+
+export function passwordResetMail(input: { to: string; name: string; link: string }): OutgoingMail {
+  return {
+    to: input.to,
+    subject: 'Reset your Ritorno password',
+    text: [
+      `Hello ${input.name},`,
+      '',
+      'Someone asked to reset the password of your Ritorno account. Open this link to choose a new one:',
+      input.link,
+      '',
+      'The link expires in one hour. If you did not ask for this, ignore this e-mail: your password stays as it is.',
+    ].join('\n'),
+  };
+}

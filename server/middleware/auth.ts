@@ -1,0 +1,41 @@
+import type { RequestHandler } from 'express';
+import { fromNodeHeaders } from 'better-auth/node';
+import { RoleSchema, type Me, type Role } from '../../shared/schemas/role';
+import type { Auth } from '../auth';
+import { HttpError } from '../lib/http-error';
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Locals {
+      me?: Me;
+    }
+  }
+}
+
+/** Loads the session from cookie or bearer token; 401 without one. */
+export function requireSession(auth: Auth): RequestHandler {
+  return async (req, res, next) => {
+    const session = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
+    if (!session) throw new HttpError(401, 'unauthenticated', 'Sign in to continue.');
+    const role = RoleSchema.safeParse(session.user.role);
+    if (!role.success) throw new HttpError(403, 'forbidden', 'This account has no role yet.');
+    res.locals.me = { id: session.user.id, name: session.user.name, email: session.user.email, role: role.data };
+    next();
+  };
+}
+
+/** 403 unless the signed-in account has one of the roles. Use after requireSession. */
+export function requireRole(...roles: Role[]): RequestHandler {
+  return (_req, res, next) => {
+    if (!res.locals.me || !roles.includes(res.locals.me.role)) {
+      throw new HttpError(403, 'forbidden', 'Your role cannot do this.');
+    }
+    next();
+  };
+}
+
+export function currentUser(locals: Express.Locals): Me {
+  if (!locals.me) throw new HttpError(401, 'unauthenticated', 'Sign in to continue.');
+  return locals.me;
+}

@@ -1,0 +1,18 @@
+import type { Auth } from '../auth';
+import type { Db } from '../db/client';
+import type { Env } from '../env';
+import type { Mailer } from '../lib/mailer';
+import type { DevMail } from '../../shared/schemas/dev-mail';
+
+/** Everything a route needs, passed in so tests can swap the clock, the mailer and the database. */
+export interface AppDeps {
+  db: Db;
+  auth: Auth;
+  mailer: Mailer;
+  env: Pick<Env, 'PUBLIC_URL' | 'NODE_ENV'>;
+  now: () => Date;
+  /** Present only while the local fake SMTP server is in use. */
+  devMailbox?: () => DevMail[];
+  /** Folder of the exported web app; served at / when given. */
+  webDir?: string;
+}

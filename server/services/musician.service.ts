@@ -1,0 +1,61 @@
+import { and, asc, eq } from 'drizzle-orm';
+import type { CaseloadEntry, Student } from '../../shared/schemas/musician';
+import type { Db } from '../db/client';
+import { clearanceShares, musicians, user } from '../db/schema';
+import { notFound } from '../lib/http-error';
+
+type MusicianRow = typeof musicians.$inferSelect;
+
+function toCaseloadEntry(row: MusicianRow): CaseloadEntry {
+  return {
+    id: row.id,
+    name: row.name,
+    email: row.email,
+    instrument: row.instrument,
+    joined: row.userId !== null,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
+export function listCaseload(db: Db, clinicianId: string): CaseloadEntry[] {
+  return db
+    .select()
+    .from(musicians)
+    .where(eq(musicians.clinicianId, clinicianId))
+    .orderBy(asc(musicians.name))
+    .all()
+    .map(toCaseloadEntry);
+}
+
+/** A clinician reaches only their own musicians: anyone else's answers 404, as if it did not exist. */
+export function getOwnMusician(db: Db, clinicianId: string, musicianId: string): CaseloadEntry {
+  const row = db
+    .select()
+    .from(musicians)
+    .where(and(eq(musicians.id, musicianId), eq(musicians.clinicianId, clinicianId)))
+    .get();
+  if (!row) throw notFound('Musician');
+  return toCaseloadEntry(row);
+}
+
+export function getMusicianByUser(db: Db, userId: string) {
+  const found = db
+    .select({ musician: musicians, clinicianName: user.name })
+    .from(musicians)
+    .innerJoin(user, eq(user.id, musicians.clinicianId))
+    .where(eq(musicians.userId, userId))
+    .get();
+  if (!found) throw notFound('Musician record');
+  return found;
+}
+
+/** A teacher's students: the musicians who shared their clearance with them. */
+export function listStudents(db: Db, teacherId: string): Student[] {
+  return db
+    .select({ id: musicians.id, name: musicians.name, instrument: musicians.instrument })
+    .from(clearanceShares)
+    .innerJoin(musicians, eq(musicians.id, clearanceShares.musicianId))
+    .where(eq(clearanceShares.teacherId, teacherId))
+    .orderBy(asc(musicians.name))
+    .all();
+}
