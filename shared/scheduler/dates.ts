@@ -1,0 +1,60 @@
+import { TZDate } from '@date-fns/tz';
+import { format } from 'date-fns';
+
+/**
+ * Plan dates are `YYYY-MM-DD` strings in the plan's own time zone. Arithmetic runs on whole day
+ * numbers (days since 1970-01-01) so that it never depends on the process time zone or on
+ * daylight-saving changes; only `localDateOf` and `instantOf` touch the zone.
+ */
+export type DayNumber = number;
+
+const MS_PER_DAY = 86_400_000;
+
+export function toDay(date: string): DayNumber {
+  const y = Number(date.slice(0, 4));
+  const m = Number(date.slice(5, 7));
+  const d = Number(date.slice(8, 10));
+  return Math.round(Date.UTC(y, m - 1, d) / MS_PER_DAY);
+}
+
+export function fromDay(day: DayNumber): string {
+  return new Date(day * MS_PER_DAY).toISOString().slice(0, 10);
+}
+
+export function addDays(date: string, days: number): string {
+  return fromDay(toDay(date) + days);
+}
+
+export function daysBetween(from: string, to: string): number {
+  return toDay(to) - toDay(from);
+}
+
+/** ISO weekday: 1 = Monday ... 7 = Sunday. 1970-01-01 was a Thursday. */
+export function isoWeekday(day: DayNumber): number {
+  return (((day + 3) % 7) + 7) % 7 + 1;
+}
+
+/** The local calendar date of an instant in a time zone. */
+export function localDateOf(instant: Date, timeZone: string): string {
+  return format(new TZDate(instant.getTime(), timeZone), 'yyyy-MM-dd');
+}
+
+/** Today's plan date: a `YYYY-MM-DD` string is taken as is, an instant is read in the plan's zone. */
+export function planToday(today: string | Date, timeZone: string): string {
+  return typeof today === 'string' ? today.slice(0, 10) : localDateOf(today, timeZone);
+}
+
+/** The instant (ISO, UTC) of a local date and `HH:mm` time in a time zone, plus some minutes. */
+export function instantOf(date: string, time: string, timeZone: string, plusMinutes = 0): string {
+  const [h = 0, m = 0] = time.split(':').map(Number);
+  const local = new TZDate(
+    Number(date.slice(0, 4)),
+    Number(date.slice(5, 7)) - 1,
+    Number(date.slice(8, 10)),
+    h,
+    m,
+    0,
+    timeZone,
+  );
+  return new Date(local.getTime() + plusMinutes * 60_000).toISOString();
+}
