@@ -88,7 +88,9 @@ export function feasibilityOf(
       ? `On the current plan the target of ${settings.targetMinutesPerDay} minutes a day is reached on ${targetReachedOn}, in time for ${settings.event.name} on ${settings.event.date}.`
       : `On the current plan the target is not reached in time for ${settings.event.name}: ${daysShort} days short. ` +
         `By ${readyBy} the plan reaches ${minutesReachable} minutes a day; ` +
-        `${reducedProgramme.ready.length} of ${programme.length} programme pieces would be fully cleared. ` +
+        (programme.length > 0
+          ? `${reducedProgramme.ready.length} of ${programme.length} programme pieces would be fully cleared. `
+          : '') +
         `Options for the clinician: a reduced programme, a shorter target (${minutesReachable} minutes a day), ` +
         `or an event on or after ${earliestFeasibleEventDate}. The caps are not compressed.`,
   };

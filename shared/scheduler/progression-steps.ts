@@ -1,0 +1,85 @@
+import type { RedFlag, SessionCheckIn } from '../schemas/check-in';
+import type { Override } from '../schemas/override';
+import type { PlanSettings } from '../schemas/plan-settings';
+import { fromDay } from './dates';
+import { gateWhere, spokenDate, type HistoryEvent, type HistoryKind, type ProgressionStatus } from './history';
+import type { Level } from './ladder';
+import { isRestDay } from './stages';
+
+/** The running state while check-ins and overrides are replayed (day numbers, see dates.ts). */
+export type Sim = {
+  stage: number;
+  periods: { stageIndex: number; startDay: number }[];
+  done: number;
+  failures: number;
+  pending: number | null;
+  held: boolean;
+  status: ProgressionStatus;
+  stoppedSince: string | null;
+  redFlags: RedFlag[];
+  sessionEndedOn: string | null;
+  history: HistoryEvent[];
+  levels: number[];
+};
+
+export type Hooks = {
+  stop: (day: number, flags: RedFlag[]) => void;
+  fail: (day: number, cause: string, effectiveDay: number) => void;
+  log: (day: number, kind: HistoryKind, from: number, message: string, by?: string) => void;
+};
+
+export function processSessions(settings: PlanSettings, ladder: Level[], s: Sim, day: number, list: SessionCheckIn[], h: Hooks): void {
+  if (list.length === 0) return;
+  let failed = false;
+  let played = 0;
+  for (const c of [...list].sort((a, b) => a.sessionIndex - b.sessionIndex)) {
+    played += c.minutesPlayed;
+    if (c.redFlags.length > 0) h.stop(day, c.redFlags);
+    const bad = c.gates.find((g) => g.pain > settings.painThreshold.session);
+    if (bad && !failed) {
+      failed = true;
+      s.sessionEndedOn = fromDay(day);
+      h.fail(day, `pain ${bad.pain} ${gateWhere(bad)}`, day + 1);
+    }
+  }
+  const planned = ladder[s.stage]?.minutesPerDay ?? 0;
+  if (played > planned && !failed)
+    h.log(day, 'over_time', s.stage, `Played ${played} minutes on ${spokenDate(fromDay(day))}, more than the ${planned} planned: keep to the timings even when it feels fine.`);
+  if (failed || s.stoppedSince || isRestDay(settings, day)) return;
+  if (settings.requireNextMorningCheck) s.pending = day;
+  else s.done += 1;
+}
+
+export function applyOverride(
+  ladder: Level[], s: Sim, day: number, o: Override,
+  h: { moveTo: (i: number, d: number) => void; log: Hooks['log'] },
+): void {
+  const from = s.stage;
+  const why = `${o.reason} (${o.by})`;
+  const when = spokenDate(fromDay(day));
+  if (o.action === 'advance' && ladder[s.stage + 1]) {
+    h.moveTo(s.stage + 1, day + 1);
+    s.held = false;
+    if (!s.stoppedSince) s.status = 'on_track';
+    h.log(day, 'clinician_advance', from, `Clinician moved up to stage ${s.stage + 1} on ${when}: ${why}.`, o.by);
+  } else if (o.action === 'step_back' && s.stage > 0) {
+    h.moveTo(s.stage - 1, day + 1);
+    if (!s.stoppedSince) s.status = 'stepped_back';
+    h.log(day, 'clinician_step_back', from, `Clinician stepped back to stage ${s.stage + 1} on ${when}: ${why}.`, o.by);
+  } else if (o.action === 'hold') {
+    s.held = true;
+    if (!s.stoppedSince) s.status = 'held';
+    h.log(day, 'clinician_hold', from, `Clinician held progression on ${when}: ${why}.`, o.by);
+  } else if (o.action === 'resume' && s.held) {
+    s.held = false;
+    if (!s.stoppedSince) s.status = 'on_track';
+    h.log(day, 'clinician_resume', from, `Clinician resumed progression on ${when}: ${why}.`, o.by);
+  } else if (o.action === 'clear_red_flag' && s.stoppedSince) {
+    s.stoppedSince = null;
+    s.redFlags = [];
+    s.done = 0;
+    s.status = s.held ? 'held' : 'on_track';
+    h.log(day, 'red_flag_cleared', from, `Clinician cleared the red flag on ${when}: ${why}. The stage starts again.`, o.by);
+  }
+}
+
