@@ -46,6 +46,7 @@ export function createAuth({ db, env, mailer }: AuthDeps) {
         sendInBackground(mailer, passwordResetMail({ to: user.email, name: user.name, link }));
       },
     },
+    logger: { disabled: env.NODE_ENV === 'test' },
     rateLimit: { enabled: env.NODE_ENV === 'production', window: 60, max: 100 },
     plugins: [
       admin({

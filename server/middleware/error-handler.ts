@@ -4,7 +4,7 @@ import type { ApiErrorBody } from '../../shared/schemas/api-error';
 import { HttpError } from '../lib/http-error';
 
 export const apiNotFound: RequestHandler = (req, res) => {
-  const body: ApiErrorBody = { error: { code: 'not_found', message: `No API route ${req.method} ${req.path}.` } };
+  const body: ApiErrorBody = { error: { code: 'not_found', message: `No API route ${req.method} ${req.originalUrl.split('?')[0]}.` } };
   res.status(404).json(body);
 };
 

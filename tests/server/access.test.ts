@@ -1,0 +1,82 @@
+import request from 'supertest';
+import { count } from 'drizzle-orm';
+import { invitations, musicians } from '@/server/db/schema';
+import { createAccount, createTestContext, signedInAgent, type TestContext } from './support/test-app';
+
+type Caller = 'anonymous' | 'clinician' | 'otherClinician' | 'musician' | 'teacher' | 'admin';
+
+interface Row {
+  method: 'get' | 'post';
+  path: (ids: { ownMusician: string }) => string;
+  body?: (caller: Caller) => object;
+  expect: Record<Caller, number>;
+}
+
+const invite = (caller: Caller) => ({ role: 'teacher', name: 'New Teacher', email: `teacher.from.${caller}@school.example` });
+
+// Who may call what. 404 for another clinician's musician: their existence is not revealed.
+const matrix: Row[] = [
+  { method: 'get', path: () => '/api/me', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 200, teacher: 200, admin: 200 } },
+  { method: 'get', path: () => '/api/me/musician', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/musicians', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 403, teacher: 403, admin: 403 } },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}`, expect: { anonymous: 401, clinician: 200, otherClinician: 404, musician: 403, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/invitations', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 403, teacher: 403, admin: 403 } },
+  { method: 'post', path: () => '/api/invitations', body: invite, expect: { anonymous: 401, clinician: 201, otherClinician: 201, musician: 403, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/students', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 200, admin: 403 } },
+  { method: 'get', path: () => '/api/admin/users', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
+  { method: 'get', path: () => '/api/admin/mail', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
+];
+
+describe('who may call what', () => {
+  let ctx: TestContext;
+  let ownMusician: string;
+  let agents: Record<Caller, ReturnType<typeof request.agent>>;
+
+  beforeAll(async () => {
+    ctx = createTestContext({ devMailbox: true });
+    await createAccount(ctx, 'clinician', 'wren@clinic.example');
+    await createAccount(ctx, 'clinician', 'odile@clinic.example');
+    await createAccount(ctx, 'teacher', 'ruth@school.example');
+    await createAccount(ctx, 'admin', 'admin@ritorno.example');
+    const wren = await signedInAgent(ctx, 'wren@clinic.example');
+    const invited = await wren
+      .post('/api/invitations')
+      .send({ role: 'musician', name: 'Pia Lund', email: 'pia@students.example', instrument: 'Viola' });
+    ownMusician = invited.body.musicianId;
+    const token = ctx.outbox[0]?.text.match(/invitation\/(\S+)/)?.[1];
+    await request(ctx.app).post(`/api/invitations/by-token/${token}/accept`).send({ password: 'correct-horse-battery' }).expect(201);
+    agents = {
+      anonymous: request.agent(ctx.app),
+      clinician: wren,
+      otherClinician: await signedInAgent(ctx, 'odile@clinic.example'),
+      musician: await signedInAgent(ctx, 'pia@students.example'),
+      teacher: await signedInAgent(ctx, 'ruth@school.example'),
+      admin: await signedInAgent(ctx, 'admin@ritorno.example'),
+    };
+  });
+
+  for (const row of matrix) {
+    for (const [caller, status] of Object.entries(row.expect) as [Caller, number][]) {
+      it(`answers ${status} to ${caller} for ${row.method.toUpperCase()} ${row.path({ ownMusician: ':id' })}`, async () => {
+        const before = ctx.db.select({ n: count() }).from(invitations).get()?.n;
+        const call = agents[caller][row.method](row.path({ ownMusician }));
+        const response = row.body ? await call.send(row.body(caller)) : await call;
+        expect(response.status).toBe(status);
+        const after = ctx.db.select({ n: count() }).from(invitations).get()?.n;
+        if (status >= 400) {
+          expect(response.body.error.code).toEqual(expect.any(String));
+          expect(after).toBe(before);
+        }
+      });
+    }
+  }
+
+  it('writes nothing when the input is malformed, and names the fields', async () => {
+    const before = ctx.db.select({ n: count() }).from(musicians).get()?.n;
+    const response = await agents.clinician.post('/api/invitations').send({ role: 'musician', name: '', email: 'not-an-address' });
+    expect(response.status).toBe(422);
+    const paths = response.body.error.issues.map((issue: { path: string }) => issue.path).sort();
+    expect(paths).toEqual(['email', 'instrument', 'name']);
+    expect(ctx.db.select({ n: count() }).from(musicians).get()?.n).toBe(before);
+  });
+});

@@ -1,0 +1,43 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import { createApp } from '@/server/app';
+import { createTestContext } from './support/test-app';
+
+describe('the server shell', () => {
+  it('answers unknown API routes with a JSON 404', async () => {
+    const { app } = createTestContext();
+    const response = await request(app).get('/api/no-such-thing');
+    expect(response.status).toBe(404);
+    expect(response.body).toEqual({ error: { code: 'not_found', message: 'No API route GET /api/no-such-thing.' } });
+  });
+
+  it('answers a body that is not JSON with 400, not 500', async () => {
+    const { app } = createTestContext();
+    const response = await request(app).post('/api/invitations/by-token/aaaaaaaaaaaaaaaaaaaa/accept').set('content-type', 'application/json').send('{"password":');
+    expect(response.status).toBe(400);
+    expect(response.body.error.code).toBe('malformed_json');
+  });
+
+  it('sends security headers', async () => {
+    const { app } = createTestContext();
+    const response = await request(app).get('/api/health');
+    expect(response.headers['x-content-type-options']).toBe('nosniff');
+    expect(response.headers['content-security-policy']).toContain("default-src 'self'");
+    expect(response.headers['x-powered-by']).toBeUndefined();
+  });
+
+  it('serves the exported web app, and index.html for deep links', async () => {
+    const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ritorno-web-'));
+    fs.writeFileSync(path.join(webDir, 'index.html'), '<!doctype html><title>Ritorno</title>');
+    fs.writeFileSync(path.join(webDir, 'app.js'), 'console.log(1)');
+    const base = createTestContext();
+    const app = createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), webDir });
+    expect((await request(app).get('/app.js')).text).toBe('console.log(1)');
+    const deep = await request(app).get('/caseload/some-id');
+    expect(deep.status).toBe(200);
+    expect(deep.text).toContain('<title>Ritorno</title>');
+    expect((await request(app).get('/api/nope')).status).toBe(404);
+  });
+});
