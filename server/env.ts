@@ -10,7 +10,8 @@ const EnvSchema = z.object({
   UPLOAD_DIR: z.string().default('data/uploads'),
   WEB_DIR: z.string().default('dist'),
   AUTH_SECRET: z.string().min(32).default('development-only-secret-change-me-0123456789'),
-  SMTP_URL: z.url().optional(),
+  // An empty value (as .env files often carry) means "not set": use the local fake.
+  SMTP_URL: z.preprocess((value) => (value === '' ? undefined : value), z.url().optional()),
   MAIL_FROM: z.string().default('Ritorno <no-reply@ritorno.local>'),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   SEED_DEMO: z
