@@ -1,4 +1,4 @@
-import { TZDate } from '@date-fns/tz';
+import { TZDate, tzOffset } from '@date-fns/tz';
 import { format } from 'date-fns';
 
 /**
@@ -44,17 +44,21 @@ export function planToday(today: string | Date, timeZone: string): string {
   return typeof today === 'string' ? today.slice(0, 10) : localDateOf(today, timeZone);
 }
 
-/** The instant (ISO, UTC) of a local date and `HH:mm` time in a time zone, plus some minutes. */
+/**
+ * The instant (ISO, UTC) of a local date and `HH:mm` time in a time zone, plus some minutes.
+ * Two passes of the zone offset, so a time just after a daylight-saving change gets the new offset;
+ * a local time inside the spring-forward gap moves forward by the gap.
+ */
 export function instantOf(date: string, time: string, timeZone: string, plusMinutes = 0): string {
   const [h = 0, m = 0] = time.split(':').map(Number);
-  const local = new TZDate(
-    Number(date.slice(0, 4)),
-    Number(date.slice(5, 7)) - 1,
-    Number(date.slice(8, 10)),
-    h,
-    m,
-    0,
-    timeZone,
-  );
-  return new Date(local.getTime() + plusMinutes * 60_000).toISOString();
+  const asUtc = Date.UTC(Number(date.slice(0, 4)), Number(date.slice(5, 7)) - 1, Number(date.slice(8, 10)), h, m);
+  const first = tzOffset(timeZone, new Date(asUtc));
+  let utc = asUtc - first * 60_000;
+  const second = tzOffset(timeZone, new Date(utc));
+  if (second !== first) {
+    const alt = asUtc - second * 60_000;
+    // Inside a spring-forward gap neither offset fits: take the later instant (the clock moved on).
+    utc = tzOffset(timeZone, new Date(alt)) === second ? alt : Math.max(utc, alt);
+  }
+  return new Date(utc + plusMinutes * 60_000).toISOString();
 }

@@ -50,35 +50,53 @@ function split(total: number, parts: number): number[] {
   return Array.from({ length: parts }, (_, i) => base + (i < total % parts ? 1 : 0));
 }
 
-/** Bursts of demanding passages inside a block, each between stretches of easy material. */
-function blockSegments(settings: PlanSettings, minutes: number, bursts: boolean): { kind: 'play' | 'burst'; minutes: number }[] {
-  const b = settings.maxBurstMinutes;
-  const e = settings.easyBetweenBurstsMinutes;
-  const k = bursts ? Math.max(0, Math.floor((minutes - e) / (b + e))) : 0;
-  const out: { kind: 'play' | 'burst'; minutes: number }[] = [];
-  for (let i = 0; i < k; i += 1) out.push({ kind: 'play', minutes: e }, { kind: 'burst', minutes: b });
-  out.push({ kind: 'play', minutes: minutes - k * (b + e) });
-  return out;
+function item(
+  kind: ItemKind,
+  minutes: number,
+  startMinute: number,
+  block?: number,
+  tier?: Tier | null,
+  gate?: SessionItem['gate'],
+): SessionItem {
+  // One object shape for every item keeps long ranges (calendars, benches) fast.
+  return { kind, minutes, startMinute, block, tier, gate };
 }
 
+/**
+ * One session: a gate before it, warm-up, blocks no longer than the stage allows, a gate after every
+ * block, a rest between blocks, cool-down. With passages cleared, each block interleaves bursts of
+ * demanding passages (at most `maxBurstMinutes`) between stretches of easy material.
+ */
 function buildSession(settings: PlanSettings, level: Level, minutes: number, bursts: boolean): SessionItem[] {
-  const items: SessionItem[] = [];
+  const items: SessionItem[] = [item('gate', 0, 0, undefined, undefined, { position: 'before' })];
   let at = 0;
-  const push = (item: Omit<SessionItem, 'startMinute'>) => {
-    items.push({ ...item, startMinute: at });
-    at += item.minutes;
-  };
-  push({ kind: 'gate', minutes: 0, gate: { position: 'before' } });
-  if (settings.warmUpMinutes > 0) push({ kind: 'warm_up', minutes: settings.warmUpMinutes });
+  if (settings.warmUpMinutes > 0) {
+    items.push(item('warm_up', settings.warmUpMinutes, at));
+    at += settings.warmUpMinutes;
+  }
+  const b = settings.maxBurstMinutes;
+  const e = settings.easyBetweenBurstsMinutes;
   const blocks = split(minutes, Math.ceil(minutes / level.blockMinutes));
-  blocks.forEach((length, i) => {
+  for (let i = 0; i < blocks.length; i += 1) {
+    const length = blocks[i] ?? 0;
     const block = i + 1;
-    for (const seg of blockSegments(settings, length, bursts)) push({ ...seg, block, tier: level.highestTier });
+    const k = bursts ? Math.max(0, Math.floor((length - e) / (b + e))) : 0;
+    for (let j = 0; j < k; j += 1) {
+      items.push(item('play', e, at, block, level.highestTier));
+      items.push(item('burst', b, at + e, block, level.highestTier));
+      at += e + b;
+    }
+    const easy = length - k * (b + e);
+    items.push(item('play', easy, at, block, level.highestTier));
+    at += easy;
     const last = block === blocks.length;
-    push({ kind: 'gate', minutes: 0, block, gate: { position: last ? 'after' : 'between', afterBlock: block } });
-    if (!last) push({ kind: 'rest', minutes: level.restMinutes, block });
-  });
-  if (settings.coolDownMinutes > 0) push({ kind: 'cool_down', minutes: settings.coolDownMinutes });
+    items.push(item('gate', 0, at, block, undefined, { position: last ? 'after' : 'between', afterBlock: block }));
+    if (!last) {
+      items.push(item('rest', level.restMinutes, at, block));
+      at += level.restMinutes;
+    }
+  }
+  if (settings.coolDownMinutes > 0) items.push(item('cool_down', settings.coolDownMinutes, at));
   return items;
 }
 
