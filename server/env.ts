@@ -22,7 +22,7 @@ const EnvSchema = z.object({
 
 export type Env = z.infer<typeof EnvSchema> & { PUBLIC_URL: string };
 
-export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
+export function parseEnv(source: Record<string, string | undefined> = process.env): Env {
   const parsed = EnvSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`);

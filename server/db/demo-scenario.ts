@@ -1,4 +1,8 @@
+import type { PieceInput } from '../../shared/schemas/piece';
+import type { PlanSettingsInput } from '../../shared/schemas/plan-settings';
 import type { Role } from '../../shared/schemas/role';
+import { addDays, localDateOf, publishedLevelsPreset } from '../../shared/scheduler';
+import type { DemoPainDay } from './demo-history';
 
 /**
  * The invented demo: Harbourside Conservatory's spring showcase, the Linden Street clinic that
@@ -18,9 +22,17 @@ interface DemoMusician {
   clinician: string;
   instrument: string;
   sharedWith: string[];
+  plan?: { settings: PlanSettingsInput; painDays: DemoPainDay[] };
+  pieces: PieceInput[];
 }
 
-export function demoScenario(_now: Date): { people: DemoPerson[]; musicians: DemoMusician[] } {
+const TIME_ZONE = 'Europe/London';
+
+/** Dates are relative to the day the demo is seeded, so the story reads the same whenever it runs. */
+export function demoScenario(now: Date): { today: string; people: DemoPerson[]; musicians: DemoMusician[] } {
+  const today = localDateOf(now, TIME_ZONE);
+  const showcase = { name: 'Harbourside Showcase', date: addDays(today, 52) };
+  const common = { timeZone: TIME_ZONE, event: showcase };
   const people: DemoPerson[] = [
     { key: 'admin', role: 'admin', name: 'Rita Admin', email: 'admin@ritorno.example' },
     { key: 'oakley', role: 'clinician', name: 'Dr Maren Oakley', email: 'maren.oakley@linden-clinic.example' },
@@ -33,10 +45,63 @@ export function demoScenario(_now: Date): { people: DemoPerson[]; musicians: Dem
     { key: 'lenz', role: 'teacher', name: 'Dario Lenz', email: 'dario.lenz@harbourside.example' },
   ];
   const musicians: DemoMusician[] = [
-    { person: 'varga', clinician: 'oakley', instrument: 'Violin', sharedWith: ['whitlow'] },
-    { person: 'brandt', clinician: 'oakley', instrument: 'Clarinet', sharedWith: ['lenz'] },
-    { person: 'haddad', clinician: 'oakley', instrument: 'Piano', sharedWith: ['whitlow', 'lenz'] },
-    { person: 'amsel', clinician: 'reyne', instrument: 'Cello', sharedWith: ['whitlow'] },
+    {
+      // On track: started on the published levels three weeks ago.
+      person: 'varga',
+      clinician: 'oakley',
+      instrument: 'Violin',
+      sharedWith: ['whitlow'],
+      plan: { settings: { ...publishedLevelsPreset.values, ...common, startDate: addDays(today, -22), targetMinutesPerDay: 90 }, painDays: [] },
+      pieces: [
+        { title: 'Sarabande in D minor', composer: 'Elsa Brunnhofer', tier: 'easy', onProgramme: true },
+        { title: 'Rondo for the Quay', composer: 'Ilario Benn', tier: 'moderate', onProgramme: true, passages: [{ bars: 'bars 88-104', demands: ['speed', 'stretch'] }] },
+        { title: 'Caprice No. 3', composer: 'Ottavia Lisle', tier: 'demanding', onProgramme: true, passages: [{ bars: 'bars 1-24', demands: ['speed', 'endurance'] }] },
+        { title: 'Open-string long tones', composer: '', tier: 'easy' },
+      ],
+    },
+    {
+      // Held after pain in the latest session.
+      person: 'brandt',
+      clinician: 'oakley',
+      instrument: 'Clarinet',
+      sharedWith: ['lenz'],
+      plan: {
+        settings: { ...common, startDate: addDays(today, -18), startMinutesPerDay: 15, targetMinutesPerDay: 75, failuresBeforeStepBack: 2 },
+        painDays: [{ playingDaysAgo: 1, afterBlock: 2, pain: 3 }],
+      },
+      pieces: [
+        { title: 'Pastorale in G', composer: 'Henrike Maas', tier: 'easy', onProgramme: true },
+        { title: 'Three Harbour Dances', composer: 'Jory Calloway', tier: 'moderate', onProgramme: true, passages: [{ bars: 'bars 40-52', demands: ['range'] }] },
+        { title: 'Concertino, first movement', composer: 'Ada Ferreira', tier: 'demanding', onProgramme: true, passages: [{ bars: 'bars 130-161', demands: ['speed', 'loudness'] }] },
+      ],
+    },
+    {
+      // Cannot reach the showcase programme in time: low tolerance now, a long target.
+      person: 'haddad',
+      clinician: 'oakley',
+      instrument: 'Piano',
+      sharedWith: ['whitlow', 'lenz'],
+      plan: {
+        settings: { ...common, startDate: addDays(today, -4), startMinutesPerDay: 5, startBlockMinutes: 5, startRestMinutes: 55, targetMinutesPerDay: 150, stepMinutes: 5, minDaysPerStage: 4 },
+        painDays: [],
+      },
+      pieces: [
+        { title: 'Nocturne in E flat', composer: 'Wilhelmina Roos', tier: 'easy', onProgramme: true },
+        { title: 'Toccata on a Bell Theme', composer: 'Piet Andersen', tier: 'demanding', onProgramme: true, passages: [{ bars: 'bars 60-95', demands: ['speed', 'stretch', 'loudness'] }] },
+        { title: 'Sonatina in F', composer: 'Marguerite Oyelaran', tier: 'moderate', onProgramme: true },
+      ],
+    },
+    {
+      person: 'amsel',
+      clinician: 'reyne',
+      instrument: 'Cello',
+      sharedWith: ['whitlow'],
+      plan: { settings: { ...common, startDate: addDays(today, -10), targetMinutesPerDay: 60 }, painDays: [] },
+      pieces: [
+        { title: 'Elegy for Low Strings', composer: 'Sven Arkwright', tier: 'easy', onProgramme: true },
+        { title: 'Suite in C, Courante', composer: 'Bettina Kohl', tier: 'moderate', onProgramme: true, passages: [{ bars: 'bars 17-30', demands: ['speed'] }] },
+      ],
+    },
   ];
-  return { people, musicians };
+  return { today, people, musicians };
 }

@@ -3,7 +3,10 @@ import { count } from 'drizzle-orm';
 import type { Role } from '../../shared/schemas/role';
 import type { Auth } from '../auth';
 import type { Db } from './client';
-import { clearanceShares, musicians, user } from './schema';
+import { PieceSchema } from '../../shared/schemas/piece';
+import { PlanSettingsSchema } from '../../shared/schemas/plan-settings';
+import { demoHistory } from './demo-history';
+import { checkIns, clearanceShares, musicians, pieces, plans, user } from './schema';
 import { DEMO_PASSWORD, demoScenario } from './demo-scenario';
 
 export interface SeededAccount {
@@ -48,6 +51,32 @@ export async function seedDemo(db: Db, auth: Auth, now: Date): Promise<{ passwor
           createdAt: now,
         })
         .run();
+      if (entry.plan) {
+        const settings = PlanSettingsSchema.parse(entry.plan.settings);
+        const clinicianId = idOf(entry.clinician);
+        tx.insert(plans)
+          .values({ id: randomUUID(), musicianId, version: 1, status: 'active', settings, createdById: clinicianId, createdAt: now, activatedAt: now })
+          .run();
+        for (const checkIn of demoHistory(settings, scenario.today, entry.plan.painDays)) {
+          tx.insert(checkIns)
+            .values({
+              id: randomUUID(),
+              musicianId,
+              date: checkIn.date,
+              kind: checkIn.kind,
+              payload: checkIn,
+              clientKey: randomUUID(),
+              recordedAt: checkIn.recordedAt ? new Date(checkIn.recordedAt) : now,
+            })
+            .run();
+        }
+      }
+      for (const input of entry.pieces) {
+        const piece = PieceSchema.parse(input);
+        tx.insert(pieces)
+          .values({ id: randomUUID(), musicianId, title: piece.title, composer: piece.composer, tier: piece.tier, passages: piece.passages, onProgramme: piece.onProgramme, createdAt: now })
+          .run();
+      }
       for (const teacher of entry.sharedWith) {
         tx.insert(clearanceShares).values({ id: randomUUID(), musicianId, teacherId: idOf(teacher), createdAt: now }).run();
       }

@@ -2,9 +2,10 @@ import { Router } from 'express';
 import type { MusicianHome } from '../../shared/schemas/musician';
 import { currentUser, requireRole, requireSession } from '../middleware/auth';
 import { getMusicianByUser } from '../services/musician.service';
+import { planOverview } from '../services/plan.service';
 import type { AppDeps } from './deps';
 
-export function meRoutes({ auth, db }: AppDeps): Router {
+export function meRoutes({ auth, db, now }: AppDeps): Router {
   const router = Router();
   router.use(requireSession(auth));
 
@@ -19,7 +20,7 @@ export function meRoutes({ auth, db }: AppDeps): Router {
       name: musician.name,
       instrument: musician.instrument,
       clinicianName,
-      plan: null,
+      plan: planOverview(db, musician.id, now()),
     };
     res.json(home);
   });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PlanOverviewSchema } from './plan-overview';
 
 /** A musician in a clinician's caseload. `joined` is false while the invitation is still open. */
 export const CaseloadEntrySchema = z.object({
@@ -8,6 +9,7 @@ export const CaseloadEntrySchema = z.object({
   instrument: z.string(),
   joined: z.boolean(),
   createdAt: z.string(),
+  plan: PlanOverviewSchema.nullable(),
 });
 export type CaseloadEntry = z.infer<typeof CaseloadEntrySchema>;
 
@@ -25,6 +27,6 @@ export const MusicianHomeSchema = z.object({
   name: z.string(),
   instrument: z.string(),
   clinicianName: z.string(),
-  plan: z.null(),
+  plan: PlanOverviewSchema.nullable(),
 });
 export type MusicianHome = z.infer<typeof MusicianHomeSchema>;

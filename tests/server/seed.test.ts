@@ -1,0 +1,29 @@
+import { seedDemo } from '@/server/db/seed';
+import { createTestContext, signedInAgent } from './support/test-app';
+
+describe('demo data', () => {
+  it('seeds the invented scenario once: a held musician, one out of reach, and private caseloads', async () => {
+    const ctx = createTestContext();
+    const now = new Date('2027-03-01T09:00:00Z');
+    const seeded = await seedDemo(ctx.db, ctx.auth, now);
+    expect(seeded?.accounts.map((a) => a.role).sort()).toEqual(
+      ['admin', 'clinician', 'clinician', 'musician', 'musician', 'musician', 'musician', 'teacher', 'teacher'],
+    );
+    expect(await seedDemo(ctx.db, ctx.auth, now)).toBeNull();
+
+    const clinician = await signedInAgent(ctx, 'maren.oakley@linden-clinic.example', seeded?.password);
+    const caseload: { name: string; plan: { status: string; feasible: boolean; daysToEvent: number } | null }[] =
+      (await clinician.get('/api/musicians')).body;
+    const byName = new Map(caseload.map((entry) => [entry.name, entry.plan]));
+    expect([...byName.keys()]).toEqual(['Caio Brandt', 'Ilse Varga', 'Noor Haddad']);
+    expect(byName.get('Caio Brandt')?.status).toBe('held');
+    expect(byName.get('Ilse Varga')).toMatchObject({ status: 'on_track', feasible: true });
+    expect(byName.get('Noor Haddad')).toMatchObject({ feasible: false });
+    expect(byName.get('Ilse Varga')?.daysToEvent).toBe(52);
+
+    const musician = await signedInAgent(ctx, 'caio.brandt@harbourside.example', seeded?.password);
+    const home = (await musician.get('/api/me/musician')).body;
+    // 28 Feb 2027 is a Sunday, the default rest day, so the latest session was on Saturday.
+    expect(home.plan.lastChange).toMatch(/^Held at stage \d+ on 27 Feb 2027: pain 3 after block 2\.$/);
+  });
+});
