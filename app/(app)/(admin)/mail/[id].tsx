@@ -1,0 +1,14 @@
+import { useLocalSearchParams } from 'expo-router';
+import { MailMessage } from '@/components/admin/mail-message';
+import { Screen } from '@/components/ui/screen';
+import { TextLink } from '@/components/ui/text-link';
+
+export default function MailMessageScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return (
+    <Screen testID="screen-mail-message" title="Message" lead="Links in the text open here, so you can follow an invitation or a reset as its recipient would.">
+      <TextLink href="/mail" label="Back to the mailbox" testID="mail-back" />
+      <MailMessage id={typeof id === 'string' ? id : ''} />
+    </Screen>
+  );
+}

@@ -1,0 +1,5 @@
+import { CaseloadView } from '@/components/caseload/caseload-view';
+
+export default function CaseloadScreen() {
+  return <CaseloadView />;
+}

@@ -1,0 +1,5 @@
+import { SessionGate } from '@/components/layout/session-gate';
+
+export default function SignedInLayout() {
+  return <SessionGate />;
+}

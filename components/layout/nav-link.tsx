@@ -1,0 +1,53 @@
+import { Pressable, StyleSheet } from 'react-native';
+import Ionicons from '@expo/vector-icons/Ionicons';
+import { Link } from 'expo-router';
+import { radii, spacing, touchTarget } from '@/constants/theme';
+import type { NavItem } from '@/hooks/use-nav-items';
+import { useTheme } from '@/hooks/use-theme';
+import { AppText } from '@/components/ui/text';
+
+export interface NavLinkProps {
+  item: NavItem;
+  active: boolean;
+  compact?: boolean;
+}
+
+/** One navigation entry; the current page is marked by a fill, a bar and aria-current, not colour alone. */
+export function NavLink({ item, active, compact = false }: NavLinkProps) {
+  const { colors } = useTheme();
+  return (
+    <Link href={item.href} asChild>
+      <Pressable
+        testID={item.testID}
+        accessibilityRole="link"
+        accessibilityLabel={item.label}
+        accessibilityState={{ selected: active }}
+        aria-current={active ? 'page' : undefined}
+        style={({ pressed }) => [
+          styles.link,
+          compact && styles.compact,
+          { borderColor: active ? colors.primary : 'transparent' },
+          (active || pressed) && { backgroundColor: colors.surfaceMuted },
+        ]}
+      >
+        <Ionicons name={item.icon} size={20} color={active ? colors.primary : colors.textMuted} />
+        <AppText variant={active ? 'bodyStrong' : 'body'} tone={active ? 'primary' : 'default'}>
+          {item.label}
+        </AppText>
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  link: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.md,
+    minHeight: touchTarget,
+    paddingHorizontal: spacing.md,
+    borderRadius: radii.md,
+    borderLeftWidth: 3,
+  },
+  compact: { borderLeftWidth: 0, borderBottomWidth: 3, borderRadius: 0, paddingHorizontal: spacing.sm, gap: spacing.xs },
+});

@@ -1,0 +1,83 @@
+import type { ComponentProps } from 'react';
+import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
+import Ionicons from '@expo/vector-icons/Ionicons';
+import { fonts, fontSizes, radii, spacing, touchTarget } from '@/constants/theme';
+import { useTheme } from '@/hooks/use-theme';
+import { AppText } from './text';
+
+type ButtonVariant = 'primary' | 'secondary' | 'ghost';
+
+export interface ButtonProps {
+  label: string;
+  onPress: () => void;
+  testID: string;
+  accessibilityLabel?: string;
+  variant?: ButtonVariant;
+  icon?: ComponentProps<typeof Ionicons>['name'];
+  loading?: boolean;
+  disabled?: boolean;
+  fullWidth?: boolean;
+}
+
+export function Button({
+  label,
+  onPress,
+  testID,
+  accessibilityLabel,
+  variant = 'primary',
+  icon,
+  loading = false,
+  disabled = false,
+  fullWidth = false,
+}: ButtonProps) {
+  const { colors } = useTheme();
+  const inactive = disabled || loading;
+  const fg = variant === 'primary' ? colors.onPrimary : colors.primary;
+  return (
+    <Pressable
+      testID={testID}
+      accessibilityRole="button"
+      accessibilityLabel={accessibilityLabel ?? label}
+      accessibilityState={{ disabled: inactive, busy: loading }}
+      disabled={inactive}
+      onPress={onPress}
+      style={({ pressed }) => [
+        styles.base,
+        fullWidth && styles.fullWidth,
+        variant === 'primary' && { backgroundColor: pressed ? colors.primaryPressed : colors.primary },
+        variant === 'secondary' && {
+          backgroundColor: pressed ? colors.surfaceMuted : colors.surface,
+          borderColor: colors.borderStrong,
+          borderWidth: 1,
+        },
+        variant === 'ghost' && pressed && { backgroundColor: colors.surfaceMuted },
+        inactive && styles.inactive,
+      ]}
+    >
+      <View style={styles.row}>
+        {loading ? (
+          <ActivityIndicator size="small" color={fg} />
+        ) : icon ? (
+          <Ionicons name={icon} size={18} color={fg} accessibilityElementsHidden importantForAccessibility="no" />
+        ) : null}
+        <AppText style={[styles.label, { color: fg }]}>{label}</AppText>
+      </View>
+    </Pressable>
+  );
+}
+
+const styles = StyleSheet.create({
+  base: {
+    minHeight: touchTarget,
+    paddingHorizontal: spacing.lg,
+    paddingVertical: spacing.sm,
+    borderRadius: radii.md,
+    alignItems: 'center',
+    justifyContent: 'center',
+    alignSelf: 'flex-start',
+  },
+  fullWidth: { alignSelf: 'stretch' },
+  row: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
+  label: { fontFamily: fonts.bold, fontSize: fontSizes.md },
+  inactive: { opacity: 0.6 },
+});

@@ -1,0 +1,108 @@
+import { useState } from 'react';
+import { Pressable, StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+import Ionicons from '@expo/vector-icons/Ionicons';
+import { useController, type Control, type FieldPath, type FieldValues } from 'react-hook-form';
+import { fonts, fontSizes, radii, spacing, touchTarget } from '@/constants/theme';
+import { useTheme } from '@/hooks/use-theme';
+import { AppText } from './text';
+
+type PassThrough = Pick<
+  TextInputProps,
+  'autoComplete' | 'keyboardType' | 'autoCapitalize' | 'returnKeyType' | 'onSubmitEditing' | 'placeholder' | 'textContentType'
+>;
+
+export interface TextFieldProps<T extends FieldValues, O = T> extends PassThrough {
+  control: Control<T, unknown, O>;
+  name: FieldPath<T>;
+  label: string;
+  testID: string;
+  hint?: string;
+  secret?: boolean;
+}
+
+/** The one text input of the app, bound to react-hook-form; shows its label, hint and error in words. */
+export function TextField<T extends FieldValues, O = T>({
+  control,
+  name,
+  label,
+  testID,
+  hint,
+  secret = false,
+  ...input
+}: TextFieldProps<T, O>) {
+  const { colors } = useTheme();
+  const { field, fieldState } = useController<T, FieldPath<T>, O>({ control, name });
+  const [focused, setFocused] = useState(false);
+  const [revealed, setRevealed] = useState(false);
+  const error = fieldState.error?.message;
+  const value = typeof field.value === 'string' ? field.value : '';
+  const borderColor = error ? colors.danger : focused ? colors.focus : colors.borderStrong;
+
+  return (
+    <View style={styles.wrap}>
+      <AppText variant="label" nativeID={`${testID}-label`}>
+        {label}
+      </AppText>
+      {hint ? (
+        <AppText variant="caption" tone="muted">
+          {hint}
+        </AppText>
+      ) : null}
+      <View style={[styles.box, { borderColor, backgroundColor: colors.surface }, focused && styles.focused]}>
+        <TextInput
+          ref={field.ref}
+          testID={testID}
+          accessibilityLabel={label}
+          accessibilityHint={error}
+          aria-invalid={error ? true : undefined}
+          value={value}
+          onChangeText={field.onChange}
+          onBlur={() => {
+            setFocused(false);
+            field.onBlur();
+          }}
+          onFocus={() => setFocused(true)}
+          secureTextEntry={secret && !revealed}
+          placeholderTextColor={colors.textMuted}
+          style={[styles.input, { color: colors.text }]}
+          {...input}
+        />
+        {secret ? (
+          <Pressable
+            testID={`${testID}-reveal`}
+            accessibilityRole="button"
+            accessibilityLabel={revealed ? 'Hide the characters' : 'Show the characters'}
+            onPress={() => setRevealed((now) => !now)}
+            style={styles.reveal}
+          >
+            <Ionicons name={revealed ? 'eye-off-outline' : 'eye-outline'} size={20} color={colors.textMuted} />
+          </Pressable>
+        ) : null}
+      </View>
+      {error ? (
+        <View style={styles.errorRow} accessibilityLiveRegion="polite">
+          <Ionicons name="alert-circle" size={16} color={colors.danger} />
+          <AppText variant="caption" tone="danger" testID={`${testID}-error`} style={styles.errorText}>
+            {error}
+          </AppText>
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.xs },
+  box: { flexDirection: 'row', alignItems: 'center', borderWidth: 1, borderRadius: radii.md, minHeight: touchTarget },
+  focused: { borderWidth: 2 },
+  input: {
+    flex: 1,
+    minHeight: touchTarget,
+    paddingHorizontal: spacing.md,
+    fontFamily: fonts.body,
+    fontSize: fontSizes.md,
+  },
+  reveal: { width: touchTarget, height: touchTarget, alignItems: 'center', justifyContent: 'center' },
+  errorRow: { flexDirection: 'row', gap: spacing.xs, alignItems: 'flex-start' },
+  errorText: { flex: 1 },
+});

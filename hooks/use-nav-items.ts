@@ -1,0 +1,34 @@
+import type { ComponentProps } from 'react';
+import type Ionicons from '@expo/vector-icons/Ionicons';
+import type { Role } from '@/shared/schemas/role';
+import { isMailboxOff, useDevMailQuery } from './use-dev-mail';
+
+export interface NavItem {
+  href: '/caseload' | '/home' | '/students' | '/users' | '/mail';
+  label: string;
+  icon: ComponentProps<typeof Ionicons>['name'];
+  testID: string;
+}
+
+const byRole: Record<Role, NavItem[]> = {
+  clinician: [{ href: '/caseload', label: 'Caseload', icon: 'people-outline', testID: 'nav-caseload' }],
+  musician: [{ href: '/home', label: 'Today', icon: 'musical-notes-outline', testID: 'nav-home' }],
+  teacher: [{ href: '/students', label: 'Students', icon: 'school-outline', testID: 'nav-students' }],
+  admin: [
+    { href: '/users', label: 'Accounts', icon: 'person-circle-outline', testID: 'nav-users' },
+    { href: '/mail', label: 'Mailbox', icon: 'mail-outline', testID: 'nav-mail' },
+  ],
+};
+
+/** Where each role lands after signing in. */
+export function homeHrefFor(role: Role): NavItem['href'] {
+  return byRole[role][0]?.href ?? '/home';
+}
+
+/** The navigation of a role; the admin's mailbox disappears when a real SMTP server is configured. */
+export function useNavItems(role: Role): NavItem[] {
+  const mail = useDevMailQuery({ enabled: role === 'admin' });
+  const items = byRole[role];
+  if (role === 'admin' && isMailboxOff(mail.error)) return items.filter((item) => item.href !== '/mail');
+  return items;
+}

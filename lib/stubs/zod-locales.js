@@ -1,0 +1,2 @@
+// Stands in for zod's locale index in the app bundle (see metro.config.js); English stays built in.
+module.exports = {};
