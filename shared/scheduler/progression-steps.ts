@@ -34,13 +34,13 @@ export function processSessions(settings: PlanSettings, ladder: Level[], s: Sim,
   let played = 0;
   for (const c of [...list].sort((a, b) => a.sessionIndex - b.sessionIndex)) {
     played += c.minutesPlayed;
-    if (c.redFlags.length > 0) h.stop(day, c.redFlags);
     const bad = c.gates.find((g) => g.pain > settings.painThreshold.session);
     if (bad && !failed) {
       failed = true;
       s.sessionEndedOn = fromDay(day);
       h.fail(day, `pain ${bad.pain} ${gateWhere(bad)}`, day + 1);
     }
+    if (c.redFlags.length > 0) h.stop(day, c.redFlags);
   }
   const planned = ladder[s.stage]?.minutesPerDay ?? 0;
   if (played > planned && !failed)

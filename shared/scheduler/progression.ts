@@ -108,12 +108,13 @@ export function progressionState(input: ProgressionInput): ProgressionState {
     if (s.pending !== null && s.pending < day - 1) s.pending = null;
     for (const m of mornings.get(date) ?? []) {
       if (m.kind !== 'next_morning') continue;
-      if (m.redFlags.length > 0) stop(day, m.redFlags);
       if (m.pain > settings.painThreshold.nextMorning) fail(day, `pain ${m.pain} the next morning`, day);
-      else if (s.pending === day - 1) {
+      else if (s.pending === day - 1 && m.redFlags.length === 0) {
         s.done += 1;
         s.pending = null;
       }
+      // A red flag is logged last so that it is the change people read first.
+      if (m.redFlags.length > 0) stop(day, m.redFlags);
     }
     const next = ladder[s.stage + 1];
     const weekAgo = s.levels[day - 7 - startDay] ?? ladder[0]?.minutesPerDay ?? 0;
