@@ -21,12 +21,20 @@ export const musicians = sqliteTable(
     name: text('name').notNull(),
     email: text('email').notNull(),
     instrument: text('instrument').notNull(),
+    /** The presenting problem, for the clinician only: body region, side and onset. */
+    problemRegion: text('problem_region'),
+    problemSide: text('problem_side', { enum: ['left', 'right', 'both', 'midline'] }),
+    problemOnset: text('problem_onset'),
+    problemSummary: text('problem_summary'),
     createdAt: timestamp('created_at').notNull(),
   },
   (table) => [index('musicians_clinician_idx').on(table.clinicianId)],
 );
 
-/** An e-mailed invitation; only the SHA-256 of its token is stored. */
+/**
+ * An e-mailed invitation; only the SHA-256 of its token is stored. For a musician, `musicianId` is the
+ * caseload entry the account joins; for a teacher, the musician whose clearance is shared on acceptance.
+ */
 export const invitations = sqliteTable(
   'invitations',
   {
@@ -45,10 +53,7 @@ export const invitations = sqliteTable(
   },
   (table) => [
     check('invitations_role_check', sql`${table.role} in ('musician', 'teacher')`),
-    check(
-      'invitations_musician_check',
-      sql`(${table.role} = 'musician') = (${table.musicianId} is not null)`,
-    ),
+    check('invitations_musician_check', sql`${table.role} <> 'musician' or ${table.musicianId} is not null`),
   ],
 );
 
