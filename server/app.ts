@@ -5,11 +5,13 @@ import express from 'express';
 import helmet from 'helmet';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { adminRoutes } from './routes/admin.routes';
+import { checkInRoutes } from './routes/check-ins.routes';
 import type { AppDeps } from './routes/deps';
 import { invitationRoutes } from './routes/invitations.routes';
 import { meRoutes } from './routes/me.routes';
 import { musicianRoutes } from './routes/musicians.routes';
 import { studentRoutes } from './routes/students.routes';
+import { todayRoutes } from './routes/today.routes';
 
 export type { AppDeps } from './routes/deps';
 
@@ -38,6 +40,8 @@ export function createApp(deps: AppDeps): express.Express {
     res.json({ ok: true });
   });
   app.use('/api/me', meRoutes(deps));
+  app.use('/api/today', todayRoutes(deps));
+  app.use('/api/check-ins', checkInRoutes(deps));
   app.use('/api/invitations', invitationRoutes(deps));
   app.use('/api/musicians', musicianRoutes(deps));
   app.use('/api/students', studentRoutes(deps));

@@ -43,3 +43,34 @@ export function passwordResetMail(input: { to: string; name: string; link: strin
     ].join('\n'),
   };
 }
+
+/** To the clinician only: it names symptoms, so it never goes to a teacher. */
+export function checkInAlertMail(input: {
+  to: string;
+  clinicianName: string;
+  musicianName: string;
+  urgent: boolean;
+  what: string;
+  date: string;
+  change: string | null;
+  link: string;
+}): OutgoingMail {
+  const subject = input.urgent
+    ? `Red flag: ${input.musicianName} has stopped playing`
+    : `Pain gate: ${input.musicianName} went over the threshold`;
+  return {
+    to: input.to,
+    subject,
+    text: [
+      `Hello ${input.clinicianName},`,
+      '',
+      `${input.musicianName} checked in on ${input.date}: ${input.what}.`,
+      input.change ? `Plan: ${input.change}` : 'The plan is unchanged.',
+      input.urgent
+        ? 'All playing is stopped until you review and clear it. Red-flag symptoms need prompt clinical review.'
+        : 'The session ended at that gate, as the plan says.',
+      '',
+      `Open the record: ${input.link}`,
+    ].join('\n'),
+  };
+}

@@ -7,6 +7,7 @@ import { PlanSettingsSchema } from '../../shared/schemas/plan-settings';
 import { planSummary } from '../../shared/scheduler';
 import type { Db } from '../db/client';
 import { checkIns, pieces, planOverrides, plans, user } from '../db/schema';
+import { toOverview } from './plan-overview';
 
 /** Everything the engine needs about one musician's active plan, read from the database. */
 export function loadActivePlan(db: Db, musicianId: string) {
@@ -60,28 +61,7 @@ export function loadActivePlan(db: Db, musicianId: string) {
 export function planOverview(db: Db, musicianId: string, now: Date): PlanOverview | null {
   const loaded = loadActivePlan(db, musicianId);
   if (!loaded) return null;
-  const summary = planSummary({ ...loaded, today: now });
-  return {
-    planId: loaded.plan.id,
-    version: loaded.plan.version,
-    today: summary.today,
-    status: summary.status,
-    stageNumber: summary.stageNumber,
-    stageCount: summary.stageCount,
-    minutesPerDay: summary.minutesPerDay,
-    sessionsPerDay: summary.sessionsPerDay,
-    longestBlockMinutes: summary.longestBlockMinutes,
-    restMinutes: summary.restMinutes,
-    highestTier: summary.highestTier,
-    nextStageStartDate: summary.nextStageStartDate,
-    event: summary.event,
-    daysToEvent: summary.daysToEvent,
-    feasible: summary.feasible,
-    targetReachedOn: summary.targetReachedOn,
-    daysShort: summary.daysShort,
-    redFlagActive: summary.redFlagActive,
-    lastChange: summary.lastChange,
-  };
+  return toOverview(loaded.plan, planSummary({ ...loaded, today: now }));
 }
 
 /** Overviews for several musicians at once (a caseload), keyed by musician id. */

@@ -22,6 +22,10 @@ const matrix: Row[] = [
   { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}`, expect: { anonymous: 401, clinician: 200, otherClinician: 404, musician: 403, teacher: 403, admin: 403 } },
   { method: 'get', path: () => '/api/invitations', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 403, teacher: 403, admin: 403 } },
   { method: 'post', path: () => '/api/invitations', body: invite, expect: { anonymous: 401, clinician: 201, otherClinician: 201, musician: 403, teacher: 403, admin: 403 } },
+  // The musician here has no plan yet: today's programme is a 404 for them, their check-in list is empty.
+  { method: 'get', path: () => '/api/today', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/check-ins', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
+  { method: 'post', path: () => '/api/check-ins', body: () => ({ clientKey: 'matrix-check-in', checkIn: { kind: 'next_morning', date: '2027-03-01', pain: 0 } }), expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
   { method: 'get', path: () => '/api/students', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 200, admin: 403 } },
   { method: 'get', path: () => '/api/admin/users', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
   { method: 'get', path: () => '/api/admin/mail', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
