@@ -40,7 +40,7 @@ const PlanSettingsObject = z.object({
   /** Playing minutes in one session before another session of the day is added. */
   maxSessionMinutes: minutes(5, 240).default(60),
   /** Local start time of each session of a day. */
-  sessionTimes: z.array(LocalTimeSchema).min(1).default(['10:00', '14:00', '18:00']),
+  sessionTimes: z.array(LocalTimeSchema).min(1).default(['10:00', '14:00', '17:00', '19:30']),
 
   /** Longest continuous block and rest between blocks now (BAPAM level 1: play 5, rest 60). */
   startBlockMinutes: minutes(1, 120).default(5),
