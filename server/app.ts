@@ -5,6 +5,7 @@ import express from 'express';
 import helmet from 'helmet';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { adminRoutes } from './routes/admin.routes';
+import { calendarRoutes } from './routes/calendar.routes';
 import { checkInRoutes } from './routes/check-ins.routes';
 import type { AppDeps } from './routes/deps';
 import { invitationRoutes } from './routes/invitations.routes';
@@ -42,6 +43,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api/me', meRoutes(deps));
   app.use('/api/today', todayRoutes(deps));
   app.use('/api/check-ins', checkInRoutes(deps));
+  app.use('/api/calendar', calendarRoutes(deps));
   app.use('/api/invitations', invitationRoutes(deps));
   app.use('/api/musicians', musicianRoutes(deps));
   app.use('/api/students', studentRoutes(deps));

@@ -25,6 +25,10 @@ export const calendarEventVersions = sqliteTable(
       .notNull()
       .references(() => musicians.id, { onDelete: 'cascade' }),
     contentHash: text('content_hash').notNull(),
+    /** Kept so that a session that disappears can still be published as CANCELLED. */
+    startsAt: text('starts_at').notNull(),
+    endsAt: text('ends_at').notNull(),
+    summary: text('summary').notNull(),
     sequence: integer('sequence').notNull().default(0),
     cancelled: integer('cancelled', { mode: 'boolean' }).notNull().default(false),
     updatedAt: timestamp('updated_at').notNull(),

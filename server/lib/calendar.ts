@@ -1,0 +1,47 @@
+import { getVtimezoneComponent } from '@touch4it/ical-timezones';
+import { TZDate } from '@date-fns/tz';
+import ical, { ICalAlarmType, ICalEventStatus } from 'ical-generator';
+
+/** One playing session as a calendar event (RFC 5545 VEVENT). */
+export interface CalendarSession {
+  uid: string;
+  sequence: number;
+  startsAt: string;
+  endsAt: string;
+  summary: string;
+  description: string;
+  cancelled: boolean;
+}
+
+// A reminder ten minutes before each session: long enough to get the instrument out (common practice).
+export const REMINDER_SECONDS = 10 * 60;
+
+/**
+ * Writes the sessions as an iCalendar file in the musician's time zone, with a VTIMEZONE so that any
+ * client reads the TZID times right, and a DISPLAY alarm (RFC 5545 3.6.6: ACTION, TRIGGER, DESCRIPTION).
+ */
+export function writeCalendar(input: { name: string; timeZone: string; sessions: CalendarSession[]; url?: string }): string {
+  const calendar = ical({
+    name: input.name,
+    prodId: { company: 'Ritorno', product: 'Ritorno', language: 'EN' },
+    timezone: { name: input.timeZone, generator: getVtimezoneComponent },
+    ttl: 60 * 60,
+    ...(input.url ? { url: input.url } : {}),
+  });
+  for (const session of input.sessions) {
+    const event = calendar.createEvent({
+      id: session.uid,
+      sequence: session.sequence,
+      start: new TZDate(session.startsAt, input.timeZone),
+      end: new TZDate(session.endsAt, input.timeZone),
+      timezone: input.timeZone,
+      summary: session.summary,
+      description: session.description,
+      status: session.cancelled ? ICalEventStatus.CANCELLED : ICalEventStatus.CONFIRMED,
+    });
+    if (!session.cancelled) {
+      event.createAlarm({ type: ICalAlarmType.display, trigger: REMINDER_SECONDS, description: `${session.summary} in 10 minutes` });
+    }
+  }
+  return calendar.toString();
+}
