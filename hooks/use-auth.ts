@@ -19,7 +19,11 @@ export function useSignInMutation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (input: SignIn) => {
-      unwrap(await authClient.signIn.email(input), 'That e-mail and password do not match an account.');
+      // keepalive: the sign-in still completes (and sets its cookie) if the page is left while it runs.
+      unwrap(
+        await authClient.signIn.email(input, { keepalive: true }),
+        'That e-mail and password do not match an account.',
+      );
     },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: meKeys.all }),
   });

@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import { api, ApiError } from '@/lib/api-client';
+import { authClient } from '@/lib/auth-client';
 import { MeSchema } from '@/shared/schemas/role';
 
 export const meKeys = {
@@ -7,10 +8,15 @@ export const meKeys = {
   current: () => [...meKeys.all, 'current'] as const,
 };
 
+async function fetchMe(signal: AbortSignal) {
+  // better-auth answers a signed-out visitor with 200 and no session, so a plain visit to the
+  // sign-in page does not fill the browser console with a failed /api/me request.
+  const session = await authClient.getSession({ fetchOptions: { signal } });
+  if (!session.data) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
+  return api('/api/me', { schema: MeSchema, signal });
+}
+
 /** The signed-in account; fails with ApiError 401 when nobody is signed in. */
 export function useMeQuery() {
-  return useQuery({
-    queryKey: meKeys.current(),
-    queryFn: ({ signal }) => api('/api/me', { schema: MeSchema, signal }),
-  });
+  return useQuery({ queryKey: meKeys.current(), queryFn: ({ signal }) => fetchMe(signal) });
 }

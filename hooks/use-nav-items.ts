@@ -4,7 +4,7 @@ import type { Role } from '@/shared/schemas/role';
 import { isMailboxOff, useDevMailQuery } from './use-dev-mail';
 
 export interface NavItem {
-  href: '/caseload' | '/home' | '/students' | '/users' | '/mail';
+  href: '/caseload' | '/home' | '/students' | '/users' | '/mailbox';
   label: string;
   icon: ComponentProps<typeof Ionicons>['name'];
   testID: string;
@@ -16,7 +16,7 @@ const byRole: Record<Role, NavItem[]> = {
   teacher: [{ href: '/students', label: 'Students', icon: 'school-outline', testID: 'nav-students' }],
   admin: [
     { href: '/users', label: 'Accounts', icon: 'person-circle-outline', testID: 'nav-users' },
-    { href: '/mail', label: 'Mailbox', icon: 'mail-outline', testID: 'nav-mail' },
+    { href: '/mailbox', label: 'Mailbox', icon: 'mail-outline', testID: 'nav-mail' },
   ],
 };
 
@@ -29,6 +29,6 @@ export function homeHrefFor(role: Role): NavItem['href'] {
 export function useNavItems(role: Role): NavItem[] {
   const mail = useDevMailQuery({ enabled: role === 'admin' });
   const items = byRole[role];
-  if (role === 'admin' && isMailboxOff(mail.error)) return items.filter((item) => item.href !== '/mail');
+  if (role === 'admin' && isMailboxOff(mail.error)) return items.filter((item) => item.href !== '/mailbox');
   return items;
 }

@@ -38,16 +38,12 @@ export function MailList() {
   return (
     <View style={[styles.list, { borderColor: colors.border, backgroundColor: colors.surface }]}>
       {newestFirst.map((message, position) => (
-        <Link key={message.id} href={{ pathname: '/mail/[id]', params: { id: message.id } }} asChild>
+        <Link key={message.id} href={{ pathname: '/mailbox/[id]', params: { id: message.id } }} asChild>
           <Pressable
             testID="mail-row"
             accessibilityRole="link"
             accessibilityLabel={`Open message: ${message.subject}, to ${message.to.join(', ')}`}
-            style={({ pressed }) => [
-              styles.row,
-              position > 0 && { borderTopWidth: 1, borderTopColor: colors.border },
-              pressed && { backgroundColor: colors.surfaceMuted },
-            ]}
+            style={[styles.row, position > 0 && { borderTopWidth: 1, borderTopColor: colors.border }]}
           >
             <View style={styles.text}>
               <AppText variant="bodyStrong" numberOfLines={1}>

@@ -1,5 +1,4 @@
 import { StyleSheet, View } from 'react-native';
-import { format } from 'date-fns';
 import { spacing } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import { useCaseloadQuery } from '@/hooks/use-musicians';
@@ -11,6 +10,7 @@ import { Table, type TableColumn } from '@/components/ui/table';
 import { AppText } from '@/components/ui/text';
 import { CaseloadCard } from './caseload-card';
 import { JoinedBadge } from './joined-badge';
+import { PlanCell } from './plan-cell';
 
 const columns: TableColumn<CaseloadEntry>[] = [
   {
@@ -27,13 +27,8 @@ const columns: TableColumn<CaseloadEntry>[] = [
     ),
   },
   { key: 'instrument', header: 'Instrument', flex: 2, render: (entry) => <AppText>{entry.instrument}</AppText> },
-  {
-    key: 'added',
-    header: 'Added',
-    flex: 2,
-    render: (entry) => <AppText tone="muted">{format(new Date(entry.createdAt), 'd MMM yyyy')}</AppText>,
-  },
-  { key: 'status', header: 'Status', flex: 2, render: (entry) => <JoinedBadge entry={entry} /> },
+  { key: 'plan', header: 'Plan', flex: 3, render: (entry) => <PlanCell entry={entry} /> },
+  { key: 'status', header: 'Account', flex: 2, render: (entry) => <JoinedBadge entry={entry} /> },
 ];
 
 /** The clinician's musicians: cards on a phone, a table once the screen is wide enough. */

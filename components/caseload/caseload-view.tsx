@@ -50,5 +50,5 @@ const styles = StyleSheet.create({
   panesWide: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xxl },
   main: { gap: spacing.xl },
   mainWide: { flex: 1, minWidth: 0 },
-  side: { width: 360 },
+  side: { width: 340 },
 });

@@ -23,11 +23,12 @@ export function NavLink({ item, active, compact = false }: NavLinkProps) {
         accessibilityLabel={item.label}
         accessibilityState={{ selected: active }}
         aria-current={active ? 'page' : undefined}
-        style={({ pressed }) => [
+        // A plain style array: Link's asChild does not pass Pressable's style callback through on the web.
+        style={[
           styles.link,
           compact && styles.compact,
           { borderColor: active ? colors.primary : 'transparent' },
-          (active || pressed) && { backgroundColor: colors.surfaceMuted },
+          active && { backgroundColor: colors.surfaceMuted },
         ]}
       >
         <Ionicons name={item.icon} size={20} color={active ? colors.primary : colors.textMuted} />

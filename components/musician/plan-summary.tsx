@@ -1,20 +1,21 @@
 import { StyleSheet, View } from 'react-native';
 import Ionicons from '@expo/vector-icons/Ionicons';
+import { format, parseISO } from 'date-fns';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { MusicianHome } from '@/shared/schemas/musician';
+import { Banner } from '@/components/ui/banner';
 import { Card } from '@/components/ui/card';
 import { AppText } from '@/components/ui/text';
+import { PlanFacts } from '@/components/plan/plan-facts';
+import { ProgressionBadge } from '@/components/plan/progression-badge';
 
 export interface PlanSummaryProps {
   plan: MusicianHome['plan'];
   clinicianName: string;
 }
 
-/**
- * The musician's plan at a glance. Only the "no plan yet" state exists so far; the stage, today's
- * minutes and the event countdown belong here once plans reach the API.
- */
+/** The musician's plan at a glance, or a clear word that it is still being prepared. */
 export function PlanSummary({ plan, clinicianName }: PlanSummaryProps) {
   const { colors } = useTheme();
   if (plan === null) {
@@ -22,7 +23,7 @@ export function PlanSummary({ plan, clinicianName }: PlanSummaryProps) {
       <Card testID="plan-summary-empty">
         <View style={styles.row}>
           <Ionicons name="calendar-outline" size={24} color={colors.accent} />
-          <AppText variant="heading" style={styles.title}>
+          <AppText variant="heading" style={styles.flex}>
             No plan yet — your clinician will prepare one
           </AppText>
         </View>
@@ -35,10 +36,34 @@ export function PlanSummary({ plan, clinicianName }: PlanSummaryProps) {
       </Card>
     );
   }
-  return null;
+  return (
+    <Card testID="plan-summary">
+      {plan.redFlagActive ? (
+        <Banner tone="danger" title="Do not play until your clinician has reviewed you">
+          {`You reported a warning sign. ${clinicianName} has been alerted; contact them if you have not heard back today.`}
+        </Banner>
+      ) : null}
+      <View style={styles.row}>
+        <AppText variant="heading" style={styles.flex}>{`Stage ${plan.stageNumber} of ${plan.stageCount}`}</AppText>
+        <ProgressionBadge plan={plan} testID="plan-status" />
+      </View>
+      <PlanFacts plan={plan} />
+      {plan.lastChange ? <AppText tone="muted">{plan.lastChange}</AppText> : null}
+      {plan.nextStageStartDate && plan.status === 'on_track' ? (
+        <AppText variant="caption" tone="muted">
+          {`Next stage from ${format(parseISO(plan.nextStageStartDate), 'EEEE d MMMM')} if your checks stay clear.`}
+        </AppText>
+      ) : null}
+      {!plan.feasible ? (
+        <Banner tone="warning" title="The full programme will not be ready in time">
+          {`At a safe pace you reach your target on ${format(parseISO(plan.targetReachedOn), 'd MMMM')}. Your clinician will talk through the options with you.`}
+        </Banner>
+      ) : null}
+    </Card>
+  );
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', gap: spacing.md, alignItems: 'center' },
-  title: { flex: 1 },
+  row: { flexDirection: 'row', gap: spacing.md, alignItems: 'center', flexWrap: 'wrap' },
+  flex: { flex: 1, minWidth: 160 },
 });

@@ -7,7 +7,7 @@ export default function MailMessageScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
   return (
     <Screen testID="screen-mail-message" title="Message" lead="Links in the text open here, so you can follow an invitation or a reset as its recipient would.">
-      <TextLink href="/mail" label="Back to the mailbox" testID="mail-back" />
+      <TextLink href="/mailbox" label="Back to the mailbox" testID="mail-back" />
       <MailMessage id={typeof id === 'string' ? id : ''} />
     </Screen>
   );
