@@ -1,9 +1,9 @@
 import { QueryClient } from '@tanstack/react-query';
 import { isApiError } from './api-client';
 
-/** Client errors (4xx) will not fix themselves: retry only network failures and server errors, twice. */
+/** Only a lost connection or a server error may fix itself: retry those twice, nothing else. */
 function shouldRetry(failureCount: number, error: unknown): boolean {
-  if (isApiError(error) && error.status >= 400 && error.status < 500) return false;
+  if (isApiError(error) && error.status !== 0 && error.status < 500) return false;
   return failureCount < 2;
 }
 

@@ -43,7 +43,7 @@ export function MailList() {
             testID="mail-row"
             accessibilityRole="link"
             accessibilityLabel={`Open message: ${message.subject}, to ${message.to.join(', ')}`}
-            style={[styles.row, position > 0 && { borderTopWidth: 1, borderTopColor: colors.border }]}
+            style={StyleSheet.flatten([styles.row, position > 0 && { borderTopWidth: 1, borderTopColor: colors.border }])}
           >
             <View style={styles.text}>
               <AppText variant="bodyStrong" numberOfLines={1}>

@@ -42,7 +42,7 @@ export function InviteForm() {
       reset(empty(values.role));
       setNotice(
         sent.emailSent
-          ? { tone: 'success', text: `Invitation sent to ${sent.name} (${sent.email}). The link works for 7 days.` }
+          ? { tone: 'success', text: `Invitation sent to ${sent.name} at ${sent.email}. The link in it works for 7 days.` }
           : { tone: 'warning', text: `${sent.name} was added, but the e-mail could not be sent. Check the mail settings.` },
       );
     } catch (error) {

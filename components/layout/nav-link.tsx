@@ -23,13 +23,13 @@ export function NavLink({ item, active, compact = false }: NavLinkProps) {
         accessibilityLabel={item.label}
         accessibilityState={{ selected: active }}
         aria-current={active ? 'page' : undefined}
-        // A plain style array: Link's asChild does not pass Pressable's style callback through on the web.
-        style={[
+        // One flat style object: on the web Link's asChild hands the style straight to the anchor element.
+        style={StyleSheet.flatten([
           styles.link,
           compact && styles.compact,
           { borderColor: active ? colors.primary : 'transparent' },
           active && { backgroundColor: colors.surfaceMuted },
-        ]}
+        ])}
       >
         <Ionicons name={item.icon} size={20} color={active ? colors.primary : colors.textMuted} />
         <AppText variant={active ? 'bodyStrong' : 'body'} tone={active ? 'primary' : 'default'}>

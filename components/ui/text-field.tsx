@@ -94,13 +94,16 @@ export function TextField<T extends FieldValues, O = T>({
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xs },
   box: { flexDirection: 'row', alignItems: 'center', borderWidth: 1, borderRadius: radii.md, minHeight: touchTarget },
-  focused: { borderWidth: 2 },
+  // The thicker border is the focus indicator; the negative margin keeps the layout from shifting.
+  focused: { borderWidth: 2, margin: -1 },
   input: {
     flex: 1,
     minHeight: touchTarget,
     paddingHorizontal: spacing.md,
     fontFamily: fonts.body,
     fontSize: fontSizes.md,
+    // The box around the input shows focus (in the focus colour, 2 px), so the browser's own ring would double it.
+    outlineWidth: 0,
   },
   reveal: { width: touchTarget, height: touchTarget, alignItems: 'center', justifyContent: 'center' },
   errorRow: { flexDirection: 'row', gap: spacing.xs, alignItems: 'flex-start' },

@@ -1,12 +1,14 @@
 import { screen } from '@testing-library/react-native';
 import { CaseloadView } from '@/components/caseload/caseload-view';
-import type { CaseloadEntry } from '@/shared/schemas/musician';
+import type { z } from 'zod';
+import type { CaseloadEntrySchema } from '@/shared/schemas/musician';
 import type { Invitation } from '@/shared/schemas/invitation';
 import { mockApi, renderScreen } from './test-utils';
 
 jest.mock('@/lib/auth-client', () => ({ authClient: { getSession: jest.fn() } }));
 
-const caseload: CaseloadEntry[] = [
+// What the server sends (fields with defaults may be left out).
+const caseload: z.input<typeof CaseloadEntrySchema>[] = [
   {
     id: 'm-1',
     name: 'Oriane Falk',
