@@ -11,6 +11,7 @@ import type { AppDeps } from './routes/deps';
 import { invitationRoutes } from './routes/invitations.routes';
 import { meRoutes } from './routes/me.routes';
 import { musicianRoutes } from './routes/musicians.routes';
+import { musicianShareRoutes, shareRoutes } from './routes/shares.routes';
 import { studentRoutes } from './routes/students.routes';
 import { todayRoutes } from './routes/today.routes';
 
@@ -47,6 +48,8 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api/invitations', invitationRoutes(deps));
   app.use('/api/musicians', musicianRoutes(deps));
   app.use('/api/students', studentRoutes(deps));
+  app.use('/api/shares', shareRoutes(deps));
+  app.use('/api/musicians/:musicianId/shares', musicianShareRoutes(deps));
   app.use('/api/admin', adminRoutes(deps));
   app.use('/api', apiNotFound);
 

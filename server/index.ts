@@ -6,6 +6,7 @@ import { seedDemo } from './db/seed';
 import { parseEnv } from './env';
 import { startFakeSmtp, type FakeSmtp } from './lib/fake-smtp';
 import { createSmtpMailer } from './lib/mailer';
+import { syncAllClearanceNotices } from './services/clearance-notice.service';
 
 async function main() {
   const env = parseEnv();
@@ -32,6 +33,15 @@ async function main() {
     devMailbox: fakeSmtp ? () => fakeSmtp.messages() : undefined,
     webDir: env.WEB_DIR,
   });
+  // Clearance changes with the calendar too (a stage passed overnight): look every hour, and at boot,
+  // which also records the baseline that later changes are compared with.
+  const clearanceDeps = { db, mailer, publicUrl: env.PUBLIC_URL };
+  const syncClearance = () =>
+    syncAllClearanceNotices(clearanceDeps, new Date()).catch((error: unknown) => console.error('[clearance] sync failed:', error));
+  void syncClearance();
+  const clearanceTimer = setInterval(syncClearance, 60 * 60 * 1000);
+  clearanceTimer.unref();
+
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     console.log(`\nRitorno is running at ${env.PUBLIC_URL}`);
     console.log(fakeSmtp ? `Mail: local fake SMTP on port ${fakeSmtp.port}; read it as the admin under Mailbox.` : 'Mail: sent through SMTP_URL.');
@@ -43,6 +53,7 @@ async function main() {
 
   const shutdown = (signal: string) => {
     console.log(`\n${signal}: closing.`);
+    clearInterval(clearanceTimer);
     server.close(() => {
       void fakeSmtp?.close();
       db.$client.close();

@@ -1,3 +1,4 @@
+import type { StudentClearance } from '../../shared/schemas/clearance';
 import type { OutgoingMail } from './mailer';
 
 /** Plain-text e-mails; every one says who sent it and why, and carries no clinical detail. */
@@ -71,6 +72,47 @@ export function checkInAlertMail(input: {
         : 'The session ended at that gate, as the plan says.',
       '',
       `Open the record: ${input.link}`,
+    ].join('\n'),
+  };
+}
+
+/** To a teacher: limits and repertoire only. Never a reason, a symptom or a score. */
+export function clearanceChangeMail(input: { to: string; teacherName: string; view: StudentClearance; link: string }): OutgoingMail {
+  const { view } = input;
+  const cleared = view.pieces.filter((piece) => piece.cleared);
+  const lines = cleared.length
+    ? cleared.map((piece) => `- ${piece.title}${piece.composer ? ` (${piece.composer})` : ''}${piece.passages.length && !piece.passages.every((p) => p.cleared) ? ', without its demanding passages for now' : ''}`)
+    : ['- nothing for the moment'];
+  return {
+    to: input.to,
+    subject: `Playing clearance changed: ${view.name}`,
+    text: [
+      `Hello ${input.teacherName},`,
+      '',
+      `What ${view.name} (${view.instrument}) may play has changed as of ${view.asOf}.`,
+      view.readiness === 'paused'
+        ? 'Playing is paused for now: please do not ask for any playing until you hear again.'
+        : `Longest continuous playing: ${view.limits.longestBlockMinutes} min, then a ${view.limits.restMinutes}-min break. Most playing in a day: ${view.limits.minutesPerDay} min.`,
+      '',
+      'Cleared now:',
+      ...lines,
+      '',
+      `See the details and a printable note: ${input.link}`,
+    ].join('\n'),
+  };
+}
+
+export function sharedWithYouMail(input: { to: string; musicianName: string; link: string }): OutgoingMail {
+  return {
+    to: input.to,
+    subject: `${input.musicianName} shared their playing clearance with you`,
+    text: [
+      'Hello,',
+      '',
+      `${input.musicianName} chose to show you, through Ritorno, which repertoire they are cleared to play and how long they may play in a lesson or rehearsal.`,
+      `See it here: ${input.link}`,
+      '',
+      'They can stop sharing at any time.',
     ].join('\n'),
   };
 }

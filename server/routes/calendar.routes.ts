@@ -21,14 +21,17 @@ export function calendarRoutes({ auth, db, env, now }: AppDeps): Router {
       return;
     }
     const musicianId = musicianOfFeed(db, parsed.data.file.replace(/\.ics$/, ''));
-    res.set('cache-control', 'private, max-age=300').type(ICS).send(calendarFor(db, musicianId, now()));
+    const ics = calendarFor(db, musicianId, now());
+    res.set('cache-control', 'private, max-age=300').type(ICS).send(ics);
   });
 
   router.use(requireSession(auth), requireRole('musician'));
   const musicianIdOf = (locals: Express.Locals) => getMusicianByUser(db, currentUser(locals).id).musician.id;
 
   router.get('/download.ics', (_req, res) => {
-    res.type(ICS).attachment('ritorno-sessions.ics').send(calendarFor(db, musicianIdOf(res.locals), now()));
+    // Built before any header is set, so an error still answers as JSON.
+    const ics = calendarFor(db, musicianIdOf(res.locals), now());
+    res.type(ICS).attachment('ritorno-sessions.ics').send(ics);
   });
 
   router.get('/feed', (_req, res) => {

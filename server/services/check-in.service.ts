@@ -8,6 +8,7 @@ import { HttpError, notFound } from '../lib/http-error';
 import type { Mailer } from '../lib/mailer';
 import type { CheckInResult, CheckInUpload } from '../../shared/schemas/today';
 import { alertClinician } from './alert.service';
+import { syncClearanceNotices } from './clearance-notice.service';
 import { loadActivePlan, planOverview } from './plan.service';
 
 export interface RecordedCheckIn {
@@ -78,6 +79,11 @@ export async function submitCheckIn(
     );
   } catch (error) {
     console.error('[mail] clinician alert not sent:', error);
+  }
+  try {
+    await syncClearanceNotices(deps, musicianId, now);
+  } catch (error) {
+    console.error('[mail] clearance notice not sent:', error);
   }
   const overview = planOverview(db, musicianId, now);
   if (!overview) throw notFound('Active plan');

@@ -3,7 +3,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import type { CreateInvitation, Invitation, InvitationPreview } from '../../shared/schemas/invitation';
 import type { Auth } from '../auth';
 import type { Db } from '../db/client';
-import { invitations, musicians, user } from '../db/schema';
+import { clearanceShares, invitations, musicians, user } from '../db/schema';
 import { HttpError } from '../lib/http-error';
 
 // Seven days: long enough to reach someone over a weekend, short enough that a stray link dies.
@@ -36,8 +36,17 @@ export interface CreatedInvitation {
   musicianId: string | null;
 }
 
-/** A clinician invites a musician (added to their caseload at once) or a teacher. */
-export function createInvitation(db: Db, clinicianId: string, input: CreateInvitation, now: Date): CreatedInvitation {
+/**
+ * A clinician invites a musician (added to their caseload at once) or a teacher; a musician invites a
+ * teacher to see their clearance (`shareMusicianId`: the share starts when the teacher accepts).
+ */
+export function createInvitation(
+  db: Db,
+  invitedById: string,
+  input: CreateInvitation,
+  now: Date,
+  shareMusicianId: string | null = null,
+): CreatedInvitation {
   const existing = db.select({ id: user.id }).from(user).where(eq(user.email, input.email)).get();
   if (existing) throw new HttpError(409, 'email_taken', 'Someone already has an account with this e-mail address.');
   const token = randomBytes(32).toString('base64url');
@@ -46,7 +55,7 @@ export function createInvitation(db: Db, clinicianId: string, input: CreateInvit
     if (input.role === 'musician') {
       musicianId = randomUUID();
       tx.insert(musicians)
-        .values({ id: musicianId, clinicianId, name: input.name, email: input.email, instrument: input.instrument, createdAt: now })
+        .values({ id: musicianId, clinicianId: invitedById, name: input.name, email: input.email, instrument: input.instrument, createdAt: now })
         .run();
     }
     const row = tx
@@ -56,8 +65,8 @@ export function createInvitation(db: Db, clinicianId: string, input: CreateInvit
         role: input.role,
         email: input.email,
         name: input.name,
-        invitedById: clinicianId,
-        musicianId,
+        invitedById,
+        musicianId: musicianId ?? shareMusicianId,
         tokenHash: hashToken(token),
         expiresAt: new Date(now.getTime() + INVITATION_LIFETIME_MS),
         createdAt: now,
@@ -116,8 +125,14 @@ export async function acceptInvitation(db: Db, auth: Auth, token: string, passwo
       .set({ acceptedAt: now })
       .where(and(eq(invitations.id, invitation.id)))
       .run();
-    if (invitation.musicianId) {
+    if (invitation.musicianId && invitation.role === 'musician') {
       tx.update(musicians).set({ userId: created.user.id }).where(eq(musicians.id, invitation.musicianId)).run();
+    }
+    if (invitation.musicianId && invitation.role === 'teacher') {
+      tx.insert(clearanceShares)
+        .values({ id: randomUUID(), musicianId: invitation.musicianId, teacherId: created.user.id, createdAt: now })
+        .onConflictDoNothing()
+        .run();
     }
   });
   return { email: invitation.email, role: invitation.role };

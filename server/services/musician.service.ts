@@ -1,7 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
-import type { CaseloadEntry, Student } from '../../shared/schemas/musician';
+import type { CaseloadEntry } from '../../shared/schemas/musician';
 import type { Db } from '../db/client';
-import { clearanceShares, musicians, user } from '../db/schema';
+import { musicians, user } from '../db/schema';
 import { notFound } from '../lib/http-error';
 import { planOverview, planOverviews } from './plan.service';
 
@@ -45,15 +45,4 @@ export function getMusicianByUser(db: Db, userId: string) {
     .get();
   if (!found) throw notFound('Musician record');
   return found;
-}
-
-/** A teacher's students: the musicians who shared their clearance with them. */
-export function listStudents(db: Db, teacherId: string): Student[] {
-  return db
-    .select({ id: musicians.id, name: musicians.name, instrument: musicians.instrument })
-    .from(clearanceShares)
-    .innerJoin(musicians, eq(musicians.id, clearanceShares.musicianId))
-    .where(eq(clearanceShares.teacherId, teacherId))
-    .orderBy(asc(musicians.name))
-    .all();
 }

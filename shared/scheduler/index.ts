@@ -13,3 +13,4 @@ export { TierSchema, TIERS, type Tier, PieceSchema, type Piece, type PieceInput,
 export { PlanSettingsSchema, type PlanSettings, type PlanSettingsInput } from '../schemas/plan-settings';
 export { CheckInSchema, type CheckIn, type CheckInInput, RedFlagSchema, RED_FLAGS, type RedFlag } from '../schemas/check-in';
 export { OverrideSchema, type Override } from '../schemas/override';
+export * from './teacher-view';

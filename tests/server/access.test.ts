@@ -26,6 +26,13 @@ const matrix: Row[] = [
   { method: 'get', path: () => '/api/today', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
   { method: 'get', path: () => '/api/check-ins', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
   { method: 'post', path: () => '/api/check-ins', body: () => ({ clientKey: 'matrix-check-in', checkIn: { kind: 'next_morning', date: '2027-03-01', pain: 0 } }), expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/calendar/feed', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/calendar/download.ics', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/shares', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
+  { method: 'post', path: () => '/api/shares', body: (caller) => ({ name: 'A Teacher', email: `shared.by.${caller}@school.example` }), expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 201, teacher: 403, admin: 403 } },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/shares`, expect: { anonymous: 401, clinician: 200, otherClinician: 404, musician: 403, teacher: 403, admin: 403 } },
+  // The teacher here has no share from this musician: not found, as if the student did not exist.
+  { method: 'get', path: ({ ownMusician }) => `/api/students/${ownMusician}`, expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 404, admin: 403 } },
   { method: 'get', path: () => '/api/students', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 200, admin: 403 } },
   { method: 'get', path: () => '/api/admin/users', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
   { method: 'get', path: () => '/api/admin/mail', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
