@@ -11,6 +11,8 @@ export interface CalendarSession {
   summary: string;
   description: string;
   cancelled: boolean;
+  /** A whole-day event (from the date of startsAt) repeating by this RRULE, e.g. weekly rest days. */
+  allDayRule?: string;
 }
 
 // A reminder ten minutes before each session: long enough to get the instrument out (common practice).
@@ -29,17 +31,18 @@ export function writeCalendar(input: { name: string; timeZone: string; sessions:
     ...(input.url ? { url: input.url } : {}),
   });
   for (const session of input.sessions) {
+    const times = session.allDayRule
+      ? { start: new Date(`${session.startsAt.slice(0, 10)}T00:00:00Z`), allDay: true, repeating: session.allDayRule }
+      : { start: new TZDate(session.startsAt, input.timeZone), end: new TZDate(session.endsAt, input.timeZone), timezone: input.timeZone };
     const event = calendar.createEvent({
       id: session.uid,
       sequence: session.sequence,
-      start: new TZDate(session.startsAt, input.timeZone),
-      end: new TZDate(session.endsAt, input.timeZone),
-      timezone: input.timeZone,
+      ...times,
       summary: session.summary,
       description: session.description,
       status: session.cancelled ? ICalEventStatus.CANCELLED : ICalEventStatus.CONFIRMED,
     });
-    if (!session.cancelled) {
+    if (!session.cancelled && !session.allDayRule) {
       event.createAlarm({ type: ICalAlarmType.display, trigger: REMINDER_SECONDS, description: `${session.summary} in 10 minutes` });
     }
   }

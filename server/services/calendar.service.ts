@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { eq } from 'drizzle-orm';
-import { addDays, progressionState, sessionsForRange, type DaySession } from '../../shared/scheduler';
+import { addDays, progressionState, restDayRecurrence, sessionsForRange, type DaySession } from '../../shared/scheduler';
 import type { Db } from '../db/client';
 import { calendarEventVersions, calendarFeeds, musicians } from '../db/schema';
 import { writeCalendar, type CalendarSession } from '../lib/calendar';
@@ -32,7 +32,11 @@ export function calendarFor(db: Db, musicianId: string, now: Date): string {
   const state = progressionState({ ...loaded, today: now });
   const from = [settings.startDate, addDays(state.today, -PAST_DAYS)].sort().at(-1) ?? settings.startDate;
   const days = sessionsForRange(settings, state, from, settings.event.date);
-  const current = days.flatMap((day) =>
+  const rest = restDayRecurrence(settings);
+  const restEvent = rest
+    ? [{ uid: `${musicianId}.rest-days@ritorno`, startsAt: `${rest.firstDate}T00:00:00.000Z`, endsAt: `${rest.firstDate}T00:00:00.000Z`, summary: 'Rest day: no playing', description: 'A planned day off playing. Rest is part of the plan.', allDayRule: rest.rule }]
+    : [];
+  const current: Omit<CalendarSession, 'sequence' | 'cancelled'>[] = [...restEvent, ...days.flatMap((day) =>
     day.sessions.map((session) => ({
       uid: `${musicianId}.${day.date}.${session.index}@ritorno`,
       startsAt: session.startsAt,
@@ -40,14 +44,14 @@ export function calendarFor(db: Db, musicianId: string, now: Date): string {
       summary: sessionTitle(session, day.sessions.length),
       description: describeSession(session, settings.painThreshold.session),
     })),
-  );
+  )];
   const sessions: CalendarSession[] = db.transaction((tx) => {
     const published = new Map(
       tx.select().from(calendarEventVersions).where(eq(calendarEventVersions.musicianId, musicianId)).all().map((row) => [row.uid, row]),
     );
     const out: CalendarSession[] = [];
     for (const event of current) {
-      const contentHash = hashOf(JSON.stringify([event.startsAt, event.endsAt, event.summary, event.description]));
+      const contentHash = hashOf(JSON.stringify([event.startsAt, event.endsAt, event.summary, event.description, event.allDayRule]));
       const before = published.get(event.uid);
       published.delete(event.uid);
       let sequence = before?.sequence ?? 0;
@@ -63,7 +67,7 @@ export function calendarFor(db: Db, musicianId: string, now: Date): string {
       out.push({ ...event, sequence, cancelled: false });
     }
     for (const gone of published.values()) {
-      if (gone.startsAt < `${from}T00:00`) continue;
+      if (gone.startsAt < `${from}T00:00` || gone.uid.endsWith('.rest-days@ritorno')) continue;
       const sequence = gone.cancelled ? gone.sequence : gone.sequence + 1;
       if (!gone.cancelled) {
         tx.update(calendarEventVersions).set({ cancelled: true, sequence, updatedAt: now }).where(eq(calendarEventVersions.uid, gone.uid)).run();

@@ -14,3 +14,4 @@ export { PlanSettingsSchema, type PlanSettings, type PlanSettingsInput } from '.
 export { CheckInSchema, type CheckIn, type CheckInInput, RedFlagSchema, RED_FLAGS, type RedFlag } from '../schemas/check-in';
 export { OverrideSchema, type Override } from '../schemas/override';
 export * from './teacher-view';
+export * from './rest-days';

@@ -27,7 +27,8 @@ describe('calendar export and feed', () => {
     const musician = await signedInAgent(ctx, fixture.email);
     const response = await musician.get('/api/calendar/download.ics');
     expect(response.headers['content-type']).toContain('text/calendar');
-    const { calendar, events } = parse(response.text);
+    const { calendar, events: all } = parse(response.text);
+    const events = all.filter(({ event }) => !event.isRecurring());
 
     const state = progressionState({ settings: fixture.settings, checkIns: [], overrides: [], today: '2027-10-25' });
     const planned = sessionsForRange(fixture.settings, state, '2027-10-25', '2027-11-20').flatMap((day) => day.sessions.map((s) => ({ day, s })));
@@ -107,5 +108,26 @@ describe('calendar export and feed', () => {
     expect(piaFeed).not.toContain(other.musicianId);
     const ottoUrl = new URL((await otto.post('/api/calendar/feed')).body.url);
     expect((await request(ctx.app).get(ottoUrl.pathname)).text).not.toContain(fixture.musicianId);
+  });
+});
+
+describe('weekly rest days in the calendar', () => {
+  it('publishes rest days as one weekly recurrence whose expansion matches the engine day by day', async () => {
+    const ctx = createTestContext();
+    ctx.clock.now = new Date('2027-10-25T08:00:00Z');
+    const fixture = await musicianWithPlan(ctx, { startDate: '2027-10-25', event: { name: 'Autumn recital', date: '2027-11-20' }, restDaysPerWeek: 2 });
+    const musician = await signedInAgent(ctx, fixture.email);
+    const { events } = parse((await musician.get('/api/calendar/download.ics')).text);
+    const rest = events.find(({ event }) => event.uid === `${fixture.musicianId}.rest-days@ritorno`);
+    expect(rest?.event.summary).toBe('Rest day: no playing');
+    expect(rest?.event.isRecurring()).toBe(true);
+    // Expanded by ical.js, the reference parser, not by our code.
+    const iterator = rest?.event.iterator();
+    const restDates: string[] = [];
+    for (let next = iterator?.next(); next; next = iterator?.next()) restDates.push(next.toString().slice(0, 10));
+
+    const programmes = sessionsForRange(fixture.settings, null, '2027-10-25', '2027-11-20');
+    expect(restDates).toEqual(programmes.filter((day) => day.kind === 'rest').map((day) => day.date));
+    expect(restDates.length).toBeGreaterThanOrEqual(6);
   });
 });
