@@ -69,7 +69,7 @@ export const checkIns = sqliteTable(
       .notNull()
       .references(() => musicians.id, { onDelete: 'cascade' }),
     date: text('date').notNull(),
-    kind: text('kind', { enum: ['session', 'next_morning'] }).notNull(),
+    kind: text('kind', { enum: ['session', 'next_morning', 'pain_report'] }).notNull(),
     payload: text('payload', { mode: 'json' }).$type<CheckIn>().notNull(),
     clientKey: text('client_key').notNull(),
     recordedAt: timestamp('recorded_at').notNull(),

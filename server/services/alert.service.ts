@@ -35,7 +35,9 @@ export async function alertClinician(
   const pain =
     input.checkIn.kind === 'next_morning'
       ? `pain ${input.checkIn.pain} the next morning`
-      : `highest gate pain ${Math.max(0, ...input.checkIn.gates.map((gate) => gate.pain))}`;
+      : input.checkIn.kind === 'pain_report'
+        ? `pain ${input.checkIn.pain} reported outside a session`
+        : `highest gate pain ${Math.max(0, ...input.checkIn.gates.map((gate) => gate.pain))}`;
   await mailer.send(
     checkInAlertMail({
       to: target.clinicianEmail,

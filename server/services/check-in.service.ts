@@ -23,6 +23,7 @@ export interface RecordedCheckIn {
 /** Pain over the plan's threshold in any gate, or on the next morning. */
 export function overThreshold(checkIn: CheckIn, threshold: { session: number; nextMorning: number }): boolean {
   if (checkIn.kind === 'next_morning') return checkIn.pain > threshold.nextMorning;
+  if (checkIn.kind === 'pain_report') return checkIn.pain > threshold.session;
   return checkIn.gates.some((gate) => gate.pain > threshold.session);
 }
 

@@ -1,4 +1,4 @@
-import type { RedFlag, SessionCheckIn } from '../schemas/check-in';
+import type { PainReport, RedFlag, SessionCheckIn } from '../schemas/check-in';
 import type { Override } from '../schemas/override';
 import type { PlanSettings } from '../schemas/plan-settings';
 import { fromDay } from './dates';
@@ -48,6 +48,20 @@ export function processSessions(settings: PlanSettings, ladder: Level[], s: Sim,
   if (failed || s.stoppedSince || isRestDay(settings, day)) return;
   if (settings.requireNextMorningCheck) s.pending = day;
   else s.done += 1;
+}
+
+/**
+ * Pain reported outside a session: over the session threshold it ends the day's playing and counts as a
+ * failed day (BAPAM: symptoms mean back to the previous level); a red flag stops all playing.
+ */
+export function processReports(settings: PlanSettings, s: Sim, day: number, list: PainReport[], h: Hooks): void {
+  for (const report of list) {
+    if (report.pain > settings.painThreshold.session && s.sessionEndedOn !== fromDay(day)) {
+      s.sessionEndedOn = fromDay(day);
+      h.fail(day, `pain ${report.pain} reported outside a session`, day + 1);
+    }
+    if (report.redFlags.length > 0) h.stop(day, report.redFlags);
+  }
 }
 
 export function applyOverride(

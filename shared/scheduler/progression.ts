@@ -1,11 +1,11 @@
-import type { CheckIn, RedFlag, SessionCheckIn } from '../schemas/check-in';
+import type { CheckIn, PainReport, RedFlag, SessionCheckIn } from '../schemas/check-in';
 import type { Override } from '../schemas/override';
 import type { Piece } from '../schemas/piece';
 import type { PlanSettings } from '../schemas/plan-settings';
 import { fromDay, planToday, toDay } from './dates';
 import { feasibilityOf, type Feasibility } from './feasibility';
 import { redFlagWords, spokenDate, type HistoryEvent, type HistoryKind, type ProgressionStatus } from './history';
-import { applyOverride, processSessions, type Sim } from './progression-steps';
+import { applyOverride, processReports, processSessions, type Sim } from './progression-steps';
 import { buildLadder, type Level } from './ladder';
 import { isRestDay, scheduleLadder, type StagePeriod } from './stages';
 
@@ -63,6 +63,7 @@ export function progressionState(input: ProgressionInput): ProgressionState {
   const todayDay = toDay(today);
   const mornings = byDate(input.checkIns.filter((c) => c.kind === 'next_morning'));
   const sessions = byDate(input.checkIns.filter((c): c is SessionCheckIn => c.kind === 'session'));
+  const reports = byDate(input.checkIns.filter((c): c is PainReport => c.kind === 'pain_report'));
   const overrides = byDate([...input.overrides].sort((a, b) => a.at.localeCompare(b.at)));
   const s: Sim = {
     stage: 0, periods: [{ stageIndex: 0, startDay }], done: 0, failures: 0, pending: null, held: false,
@@ -127,6 +128,7 @@ export function progressionState(input: ProgressionInput): ProgressionState {
     }
     s.levels.push(ladder[s.stage]?.minutesPerDay ?? 0);
     processSessions(settings, ladder, s, day, sessions.get(date) ?? [], { stop, fail, log });
+    processReports(settings, s, day, reports.get(date) ?? [], { stop, fail, log });
     for (const o of overrides.get(date) ?? []) applyOverride(ladder, s, day, o, { moveTo, log });
   }
   return finish(input, ladder, s, todayDay, sessions.has(today));

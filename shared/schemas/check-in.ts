@@ -65,9 +65,25 @@ export const NextMorningCheckInSchema = z.object({
 });
 export type NextMorningCheckIn = z.infer<typeof NextMorningCheckInSchema>;
 
+/**
+ * Pain reported at any time, outside a session. Over the session threshold it counts like a failed gate
+ * (no more playing that day; hold or step back); a red flag stops all playing.
+ */
+export const PainReportSchema = z.object({
+  kind: z.literal('pain_report'),
+  id: z.string().optional(),
+  date: LocalDateSchema,
+  pain: PainScoreSchema,
+  redFlags: z.array(RedFlagSchema).default([]),
+  note: z.string().max(2000).optional(),
+  recordedAt: z.string().optional(),
+});
+export type PainReport = z.infer<typeof PainReportSchema>;
+
 export const CheckInSchema = z.discriminatedUnion('kind', [
   SessionCheckInSchema,
   NextMorningCheckInSchema,
+  PainReportSchema,
 ]);
 export type CheckIn = z.infer<typeof CheckInSchema>;
 export type CheckInInput = z.input<typeof CheckInSchema>;

@@ -1,4 +1,4 @@
-import { progressionState, sessionsForDate, type Override } from '@/shared/scheduler';
+import { defaultPlanSettings, progressionState, sessionsForDate, type Override } from '@/shared/scheduler';
 import { cleanSession, followPlan, morning, painfulSession, settingsWith } from './fixtures';
 
 const override = (action: Override['action'], date: string, at = `${date}T18:00:00Z`): Override => ({
@@ -105,5 +105,23 @@ describe('progression from check-ins', () => {
   it('does read today from an instant in the plan zone when given a Date', () => {
     const state = progressionState({ settings, checkIns: [], overrides: [], today: new Date('2025-03-05T23:30:00Z') });
     expect(state.today).toBe('2025-03-05');
+  });
+});
+
+describe('pain reported outside a session', () => {
+  // BAPAM: symptoms during or after playing mean back to the previous level until you can progress.
+  it('ends the day and counts as a failed day when over the threshold, and stops on a red flag', () => {
+    const settings = defaultPlanSettings({ startDate: '2027-03-01', event: { name: 'Recital', date: '2027-05-01' } });
+    const report = (pain: number, redFlags: ('numbness' | 'swelling')[] = []) => ({ kind: 'pain_report' as const, date: '2027-03-02', pain, redFlags });
+    const over = progressionState({ settings, checkIns: [report(2)], overrides: [], today: '2027-03-02' });
+    expect(over.sessionEndedOn).toBe('2027-03-02');
+    expect(over.status).toBe('held');
+    expect(over.history.at(-1)?.message).toContain('pain 2 reported outside a session');
+    const within = progressionState({ settings: { ...settings, painThreshold: { session: 3, nextMorning: 0 } }, checkIns: [report(2)], overrides: [], today: '2027-03-02' });
+    expect(within.status).toBe('on_track');
+    expect(within.sessionEndedOn).toBeNull();
+    const flagged = progressionState({ settings, checkIns: [report(0, ['swelling'])], overrides: [], today: '2027-03-02' });
+    expect(flagged.status).toBe('stopped');
+    expect(flagged.stoppedSince).toBe('2027-03-02');
   });
 });
