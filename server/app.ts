@@ -10,9 +10,12 @@ import { checkInRoutes } from './routes/check-ins.routes';
 import type { AppDeps } from './routes/deps';
 import { invitationRoutes } from './routes/invitations.routes';
 import { meRoutes } from './routes/me.routes';
+import { myDocumentRoutes } from './routes/my-documents.routes';
 import { musicianRoutes } from './routes/musicians.routes';
+import { planPresetRoutes } from './routes/plan-presets.routes';
 import { musicianShareRoutes, shareRoutes } from './routes/shares.routes';
 import { studentRoutes } from './routes/students.routes';
+import { summaryRoutes } from './routes/summary.routes';
 import { todayRoutes } from './routes/today.routes';
 
 export type { AppDeps } from './routes/deps';
@@ -47,6 +50,9 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api/calendar', calendarRoutes(deps));
   app.use('/api/invitations', invitationRoutes(deps));
   app.use('/api/musicians', musicianRoutes(deps));
+  app.use('/api/plan-presets', planPresetRoutes(deps));
+  app.use('/api/documents', myDocumentRoutes(deps));
+  app.use('/api/summary', summaryRoutes(deps));
   app.use('/api/students', studentRoutes(deps));
   app.use('/api/shares', shareRoutes(deps));
   app.use('/api/musicians/:musicianId/shares', musicianShareRoutes(deps));

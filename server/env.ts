@@ -8,6 +8,19 @@ const EnvSchema = z.object({
   PUBLIC_URL: z.url().optional(),
   DATABASE_PATH: z.string().default('data/ritorno.db'),
   UPLOAD_DIR: z.string().default('data/uploads'),
+  // A hosted object store for documents; when S3_BUCKET is empty, files stay in UPLOAD_DIR.
+  S3_BUCKET: z.preprocess((value) => (value === '' ? undefined : value), z.string().optional()),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_ENDPOINT: z.preprocess((value) => (value === '' ? undefined : value), z.url().optional()),
+  S3_ACCESS_KEY_ID: z.preprocess((value) => (value === '' ? undefined : value), z.string().optional()),
+  S3_SECRET_ACCESS_KEY: z.preprocess((value) => (value === '' ? undefined : value), z.string().optional()),
+  S3_FORCE_PATH_STYLE: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((value) => value === 'true'),
+  // The weekly caseload summary: cron expression and its time zone (Monday 07:00 by default).
+  SUMMARY_CRON: z.string().default('0 7 * * 1'),
+  SUMMARY_TIME_ZONE: z.string().default('Europe/London'),
   WEB_DIR: z.string().default('dist'),
   AUTH_SECRET: z.string().min(32).default('development-only-secret-change-me-0123456789'),
   // An empty value (as .env files often carry) means "not set": use the local fake.

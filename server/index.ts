@@ -5,7 +5,9 @@ import { migrateDatabase, openDatabase } from './db/client';
 import { seedDemo } from './db/seed';
 import { parseEnv } from './env';
 import { startFakeSmtp, type FakeSmtp } from './lib/fake-smtp';
+import { startWeeklySummaryJob } from './jobs/weekly-summary';
 import { createSmtpMailer } from './lib/mailer';
+import { createStorage } from './lib/storage';
 import { syncAllClearanceNotices } from './services/clearance-notice.service';
 
 async function main() {
@@ -30,6 +32,7 @@ async function main() {
     mailer,
     env,
     now: () => new Date(),
+    storage: createStorage(env),
     devMailbox: fakeSmtp ? () => fakeSmtp.messages() : undefined,
     webDir: env.WEB_DIR,
   });
@@ -42,6 +45,7 @@ async function main() {
   const clearanceTimer = setInterval(syncClearance, 60 * 60 * 1000);
   clearanceTimer.unref();
 
+  const summaryJob = startWeeklySummaryJob({ db, mailer, publicUrl: env.PUBLIC_URL, pattern: env.SUMMARY_CRON, timeZone: env.SUMMARY_TIME_ZONE });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     console.log(`\nRitorno is running at ${env.PUBLIC_URL}`);
     console.log(fakeSmtp ? `Mail: local fake SMTP on port ${fakeSmtp.port}; read it as the admin under Mailbox.` : 'Mail: sent through SMTP_URL.');
@@ -54,6 +58,7 @@ async function main() {
   const shutdown = (signal: string) => {
     console.log(`\n${signal}: closing.`);
     clearInterval(clearanceTimer);
+    summaryJob.stop();
     server.close(() => {
       void fakeSmtp?.close();
       db.$client.close();

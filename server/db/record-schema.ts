@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { check, index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { SETUP_KINDS } from '../../shared/schemas/setup';
 import { user } from './auth-schema';
 import { musicians } from './caseload-schema';
 
@@ -22,7 +23,7 @@ export const clinicalNotes = sqliteTable(
   (table) => [index('clinical_notes_musician_idx').on(table.musicianId)],
 );
 
-export const SETUP_KINDS = ['seat_wedge', 'chin_rest', 'shoulder_rest', 'thumb_rest', 'strap', 'stand_height', 'custom'] as const;
+export { SETUP_KINDS };
 
 /** A modification of the playing setup the clinician prescribes; shown to the musician as a reminder. */
 export const setupItems = sqliteTable(

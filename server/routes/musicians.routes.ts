@@ -1,24 +1,41 @@
 import { Router } from 'express';
-import { z } from 'zod';
+import { CaseloadQuerySchema } from '../../shared/schemas/musician';
 import { currentUser, requireRole, requireSession } from '../middleware/auth';
-import { getOwnMusician, listCaseload } from '../services/musician.service';
+import { getCaseloadEntry, listCaseload } from '../services/caseload.service';
 import type { AppDeps } from './deps';
+import { documentRoutes } from './documents.routes';
+import { paramsOf } from './params';
+import { pieceRoutes } from './pieces.routes';
+import { planStateRoutes } from './plan-state.routes';
+import { planVersionRoutes } from './plan-versions.routes';
+import { recordRoutes } from './record.routes';
+import { setupRoutes } from './setup.routes';
 
-const IdParams = z.object({ id: z.string().min(1).max(100) });
-
-/** The clinician's caseload; musicians join it by invitation (invitations.routes.ts). */
-export function musicianRoutes({ auth, db, now }: AppDeps): Router {
+/**
+ * The clinician's caseload and everything under one musician (/api/musicians/:id/...). The session and
+ * the role are checked here once for every sub-router; each service then checks ownership (404).
+ */
+export function musicianRoutes(deps: AppDeps): Router {
+  const { auth, db, now } = deps;
   const router = Router();
   router.use(requireSession(auth), requireRole('clinician'));
 
-  router.get('/', (_req, res) => {
-    res.json(listCaseload(db, currentUser(res.locals).id, now()));
+  // ?sort=name|alerts|event|last_check_in, ?status=<status>|no_plan, ?alerts=only
+  router.get('/', (req, res) => {
+    const query = CaseloadQuerySchema.parse(req.query);
+    res.json(listCaseload(db, currentUser(res.locals).id, now(), query));
   });
 
   router.get('/:id', (req, res) => {
-    const { id } = IdParams.parse(req.params);
-    res.json(getOwnMusician(db, currentUser(res.locals).id, id, now()));
+    const { id } = paramsOf(req, 'id');
+    res.json(getCaseloadEntry(db, currentUser(res.locals).id, id, now()));
   });
 
+  router.use('/:id/plans', planVersionRoutes(deps));
+  router.use('/:id/plan', planStateRoutes(deps));
+  router.use('/:id/pieces', pieceRoutes(deps));
+  router.use('/:id/setup', setupRoutes(deps));
+  router.use('/:id/documents', documentRoutes(deps));
+  router.use('/:id', recordRoutes(deps));
   return router;
 }

@@ -40,7 +40,13 @@ export function loadActivePlan(db: Db, musicianId: string) {
       by,
       at: override.at.toISOString(),
     }));
-  const repertoire: Piece[] = db
+  const repertoire = loadPieces(db, musicianId);
+  return { plan, settings, checkIns: reported, overrides, pieces: repertoire };
+}
+
+/** The musician's repertoire as the engine reads it, by title. */
+export function loadPieces(db: Db, musicianId: string): Piece[] {
+  return db
     .select()
     .from(pieces)
     .where(eq(pieces.musicianId, musicianId))
@@ -54,7 +60,6 @@ export function loadActivePlan(db: Db, musicianId: string) {
       passages: row.passages,
       onProgramme: row.onProgramme,
     }));
-  return { plan, settings, checkIns: reported, overrides, pieces: repertoire };
 }
 
 /** The active plan at a glance, as of `now` in the plan's own time zone; null without one. */

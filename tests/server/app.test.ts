@@ -3,6 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { createApp } from '@/server/app';
+import { memoryStorage } from '@/server/lib/storage';
 import { createTestContext } from './support/test-app';
 
 describe('the server shell', () => {
@@ -33,7 +34,7 @@ describe('the server shell', () => {
     fs.writeFileSync(path.join(webDir, 'index.html'), '<!doctype html><title>Ritorno</title>');
     fs.writeFileSync(path.join(webDir, 'app.js'), 'console.log(1)');
     const base = createTestContext();
-    const app = createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), webDir });
+    const app = createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), storage: memoryStorage(), webDir });
     expect((await request(app).get('/app.js')).text).toBe('console.log(1)');
     const deep = await request(app).get('/caseload/some-id');
     expect(deep.status).toBe(200);

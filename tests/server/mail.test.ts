@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { createApp } from '@/server/app';
+import { memoryStorage } from '@/server/lib/storage';
 import { startFakeSmtp, type FakeSmtp } from '@/server/lib/fake-smtp';
 import { createSmtpMailer } from '@/server/lib/mailer';
 import { createAccount, createTestContext, signedInAgent } from './support/test-app';
@@ -33,6 +34,7 @@ describe('e-mail through SMTP and the development mailbox', () => {
       mailer: { send: async () => undefined },
       env: { PUBLIC_URL: 'http://ritorno.test', NODE_ENV: 'test' },
       now: () => new Date(),
+      storage: memoryStorage(),
       devMailbox: () => fake.messages(),
     });
     await createAccount(withFake, 'admin', 'admin@ritorno.example');

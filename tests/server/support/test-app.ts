@@ -4,6 +4,7 @@ import { createApp } from '@/server/app';
 import { createAuth, type Auth } from '@/server/auth';
 import { migrateDatabase, openDatabase, type Db } from '@/server/db/client';
 import type { Mailer, OutgoingMail } from '@/server/lib/mailer';
+import { memoryStorage } from '@/server/lib/storage';
 import type { Role } from '@/shared/schemas/role';
 import type { Express } from 'express';
 
@@ -16,6 +17,7 @@ export interface TestContext {
   auth: Auth;
   outbox: OutgoingMail[];
   clock: { now: Date };
+  storage: ReturnType<typeof memoryStorage>;
 }
 
 /** A fresh app on a fresh in-memory database, with a mailer that records what it would send. */
@@ -32,15 +34,17 @@ export function createTestContext(options: { devMailbox?: boolean; failMail?: bo
   const env = { PUBLIC_URL, NODE_ENV: 'test' as const, AUTH_SECRET: 'test-secret-test-secret-test-secret-1234' };
   const auth = createAuth({ db, env, mailer });
   const clock = { now: new Date('2027-03-01T09:00:00Z') };
+  const storage = memoryStorage();
   const app = createApp({
     db,
     auth,
     mailer,
     env,
     now: () => clock.now,
+    storage,
     devMailbox: options.devMailbox ? () => [] : undefined,
   });
-  return { app, db, auth, outbox, clock };
+  return { app, db, auth, outbox, clock, storage };
 }
 
 /** Creates an account with a role directly on the server, as the seed and invitations do. */
