@@ -33,7 +33,8 @@ export function planStateRoutes({ db, now }: AppDeps): Router {
   // text/html: a self-contained printable page.
   router.get('/print', (req, res) => {
     const { clinicianId, musicianId } = ids(req, res.locals);
-    res.type('html').set('cache-control', 'no-store').send(printablePlan(db, clinicianId, musicianId, now()));
+    const html = printablePlan(db, clinicianId, musicianId, now());
+    res.type('html').set('cache-control', 'no-store').send(html);
   });
 
   return router;

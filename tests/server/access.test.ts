@@ -1,18 +1,59 @@
 import request from 'supertest';
 import { count } from 'drizzle-orm';
-import { invitations, musicians } from '@/server/db/schema';
+import { randomUUID } from 'node:crypto';
+import { invitations, musicians, plans } from '@/server/db/schema';
+import { PlanSettingsSchema } from '@/shared/schemas/plan-settings';
 import { createAccount, createTestContext, signedInAgent, type TestContext } from './support/test-app';
 
 type Caller = 'anonymous' | 'clinician' | 'otherClinician' | 'musician' | 'teacher' | 'admin';
 
+interface Ids {
+  ownMusician: string;
+  /** Another musician of the same clinician, with an active plan. */
+  planned: string;
+  /** A private document of ownMusician. */
+  privateDoc: string;
+}
+
 interface Row {
-  method: 'get' | 'post';
-  path: (ids: { ownMusician: string }) => string;
+  method: 'get' | 'post' | 'patch';
+  path: (ids: Ids) => string;
   body?: (caller: Caller) => object;
   expect: Record<Caller, number>;
 }
 
 const invite = (caller: Caller) => ({ role: 'teacher', name: 'New Teacher', email: `teacher.from.${caller}@school.example` });
+
+const clinicianOnly = (ok: number) => ({ anonymous: 401, clinician: ok, otherClinician: 404, musician: 403, teacher: 403, admin: 403 });
+const settings = { settings: { startDate: '2027-03-08', event: { name: 'Recital', date: '2027-05-01' } } };
+
+// The clinician's record of one musician: another clinician gets 404, everyone else 403, anonymous 401.
+const recordRows: Row[] = [
+  { method: 'get', path: () => '/api/plan-presets', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 403, teacher: 403, admin: 403 } },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/profile`, expect: clinicianOnly(200) },
+  { method: 'patch', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/profile`, body: () => ({ problem: { region: 'Left forearm' } }), expect: clinicianOnly(200) },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/notes`, expect: clinicianOnly(200) },
+  { method: 'post', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/notes`, body: () => ({ body: 'Seen today.' }), expect: clinicianOnly(201) },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/check-ins`, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ planned }) => `/api/musicians/${planned}/chart`, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ planned }) => `/api/musicians/${planned}/load`, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/plans`, expect: clinicianOnly(200) },
+  { method: 'post', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/plans`, body: () => settings, expect: clinicianOnly(201) },
+  { method: 'post', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/plans/preview`, body: () => settings, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ planned }) => `/api/musicians/${planned}/plan`, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ planned }) => `/api/musicians/${planned}/plan/overrides`, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ planned }) => `/api/musicians/${planned}/plan/print`, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/pieces`, expect: clinicianOnly(200) },
+  { method: 'post', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/pieces`, body: () => ({ title: 'Etude', tier: 'easy' }), expect: clinicianOnly(201) },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/setup`, expect: clinicianOnly(200) },
+  { method: 'post', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/setup`, body: () => ({ kind: 'strap', label: 'Neck strap' }), expect: clinicianOnly(201) },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/documents`, expect: clinicianOnly(200) },
+  { method: 'get', path: ({ ownMusician, privateDoc }) => `/api/musicians/${ownMusician}/documents/${privateDoc}/file`, expect: clinicianOnly(200) },
+  // A musician sees only documents shared with them: a private one is not found.
+  { method: 'get', path: () => '/api/documents', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
+  { method: 'get', path: ({ privateDoc }) => `/api/documents/${privateDoc}/file`, expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
+  { method: 'post', path: () => '/api/summary/send-now', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 403, teacher: 403, admin: 403 } },
+];
 
 // Who may call what. 404 for another clinician's musician: their existence is not revealed.
 const matrix: Row[] = [
@@ -36,16 +77,17 @@ const matrix: Row[] = [
   { method: 'get', path: () => '/api/students', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 200, admin: 403 } },
   { method: 'get', path: () => '/api/admin/users', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
   { method: 'get', path: () => '/api/admin/mail', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
+  ...recordRows,
 ];
 
 describe('who may call what', () => {
   let ctx: TestContext;
-  let ownMusician: string;
+  let ids: Ids;
   let agents: Record<Caller, ReturnType<typeof request.agent>>;
 
   beforeAll(async () => {
     ctx = createTestContext({ devMailbox: true });
-    await createAccount(ctx, 'clinician', 'wren@clinic.example');
+    const wrenId = await createAccount(ctx, 'clinician', 'wren@clinic.example');
     await createAccount(ctx, 'clinician', 'odile@clinic.example');
     await createAccount(ctx, 'teacher', 'ruth@school.example');
     await createAccount(ctx, 'admin', 'admin@ritorno.example');
@@ -53,7 +95,13 @@ describe('who may call what', () => {
     const invited = await wren
       .post('/api/invitations')
       .send({ role: 'musician', name: 'Pia Lund', email: 'pia@students.example', instrument: 'Viola' });
-    ownMusician = invited.body.musicianId;
+    const ownMusician: string = invited.body.musicianId;
+    const planned = randomUUID();
+    ctx.db.insert(musicians).values({ id: planned, clinicianId: wrenId, name: 'Tam Reed', email: 'tam@students.example', instrument: 'Flute', createdAt: ctx.clock.now }).run();
+    const active = PlanSettingsSchema.parse({ startDate: '2027-02-22', event: { name: 'Recital', date: '2027-05-01' } });
+    ctx.db.insert(plans).values({ id: randomUUID(), musicianId: planned, version: 1, status: 'active', settings: active, createdById: wrenId, createdAt: ctx.clock.now, activatedAt: ctx.clock.now }).run();
+    const doc = await wren.post(`/api/musicians/${ownMusician}/documents`).field('title', 'Letter').attach('file', Buffer.from('%PDF-1.4 letter'), 'letter.pdf').expect(201);
+    ids = { ownMusician, planned, privateDoc: doc.body.id };
     const token = ctx.outbox[0]?.text.match(/invitation\/(\S+)/)?.[1];
     await request(ctx.app).post(`/api/invitations/by-token/${token}/accept`).send({ password: 'correct-horse-battery' }).expect(201);
     agents = {
@@ -68,9 +116,9 @@ describe('who may call what', () => {
 
   for (const row of matrix) {
     for (const [caller, status] of Object.entries(row.expect) as [Caller, number][]) {
-      it(`answers ${status} to ${caller} for ${row.method.toUpperCase()} ${row.path({ ownMusician: ':id' })}`, async () => {
+      it(`answers ${status} to ${caller} for ${row.method.toUpperCase()} ${row.path({ ownMusician: ':id', planned: ':planned', privateDoc: ':doc' })}`, async () => {
         const before = ctx.db.select({ n: count() }).from(invitations).get()?.n;
-        const call = agents[caller][row.method](row.path({ ownMusician }));
+        const call = agents[caller][row.method](row.path(ids));
         const response = row.body ? await call.send(row.body(caller)) : await call;
         expect(response.status).toBe(status);
         const after = ctx.db.select({ n: count() }).from(invitations).get()?.n;
