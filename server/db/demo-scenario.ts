@@ -76,13 +76,24 @@ export function demoScenario(now: Date): { today: string; people: DemoPerson[]; 
       ],
     },
     {
-      // Cannot reach the showcase programme in time: low tolerance now, a long target.
+      // Cannot reach the showcase programme in time: low tolerance now, a long target. Her easy piece
+      // is cleared from stage 2, where she is now, so a step back takes it away again.
       person: 'haddad',
       clinician: 'oakley',
       instrument: 'Piano',
       sharedWith: ['whitlow', 'lenz'],
       plan: {
-        settings: { ...common, startDate: addDays(today, -4), startMinutesPerDay: 5, startBlockMinutes: 5, startRestMinutes: 55, targetMinutesPerDay: 150, stepMinutes: 5, minDaysPerStage: 4 },
+        settings: {
+          ...common,
+          startDate: addDays(today, -8),
+          startMinutesPerDay: 5,
+          startBlockMinutes: 5,
+          startRestMinutes: 55,
+          targetMinutesPerDay: 150,
+          stepMinutes: 5,
+          minDaysPerStage: 4,
+          tierUnlockStage: { easy: 2, moderate: 4, demanding: 7 },
+        },
         painDays: [],
       },
       pieces: [
