@@ -11,6 +11,7 @@ import type { AppDeps } from './routes/deps';
 import { invitationRoutes } from './routes/invitations.routes';
 import { meRoutes } from './routes/me.routes';
 import { myDocumentRoutes } from './routes/my-documents.routes';
+import { myPlanRoutes } from './routes/my-plan.routes';
 import { musicianRoutes } from './routes/musicians.routes';
 import { planPresetRoutes } from './routes/plan-presets.routes';
 import { musicianShareRoutes, shareRoutes } from './routes/shares.routes';
@@ -46,6 +47,7 @@ export function createApp(deps: AppDeps): express.Express {
   });
   app.use('/api/me', meRoutes(deps));
   app.use('/api/today', todayRoutes(deps));
+  app.use('/api/plan', myPlanRoutes(deps));
   app.use('/api/check-ins', checkInRoutes(deps));
   app.use('/api/calendar', calendarRoutes(deps));
   app.use('/api/invitations', invitationRoutes(deps));

@@ -65,6 +65,7 @@ const matrix: Row[] = [
   { method: 'post', path: () => '/api/invitations', body: invite, expect: { anonymous: 401, clinician: 201, otherClinician: 201, musician: 403, teacher: 403, admin: 403 } },
   // The musician here has no plan yet: today's programme is a 404 for them, their check-in list is empty.
   { method: 'get', path: () => '/api/today', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
+  { method: 'get', path: () => '/api/plan', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
   { method: 'get', path: () => '/api/check-ins', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
   { method: 'post', path: () => '/api/check-ins', body: () => ({ clientKey: 'matrix-check-in', checkIn: { kind: 'next_morning', date: '2027-03-01', pain: 0 } }), expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 404, teacher: 403, admin: 403 } },
   { method: 'get', path: () => '/api/calendar/feed', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
