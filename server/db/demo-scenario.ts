@@ -1,7 +1,7 @@
 import type { PieceInput } from '../../shared/schemas/piece';
 import type { PlanSettingsInput } from '../../shared/schemas/plan-settings';
 import type { Role } from '../../shared/schemas/role';
-import { addDays, localDateOf, publishedLevelsPreset } from '../../shared/scheduler';
+import { addDays, isoWeekday, localDateOf, publishedLevelsPreset, toDay } from '../../shared/scheduler';
 import type { DemoPainDay } from './demo-history';
 
 /**
@@ -32,7 +32,10 @@ const TIME_ZONE = 'Europe/London';
 export function demoScenario(now: Date): { today: string; people: DemoPerson[]; musicians: DemoMusician[] } {
   const today = localDateOf(now, TIME_ZONE);
   const showcase = { name: 'Harbourside Showcase', date: addDays(today, 52) };
-  const common = { timeZone: TIME_ZONE, event: showcase };
+  // The weekly rest day falls three days after the seed day, so the demo opens on a playing day that
+  // follows one (the next-morning question shows) whatever weekday it is seeded on.
+  const restWeekday = ((isoWeekday(toDay(today)) + 2) % 7) + 1;
+  const common = { timeZone: TIME_ZONE, event: showcase, restDaysPerWeek: 1, restWeekdays: [restWeekday] };
   const people: DemoPerson[] = [
     { key: 'admin', role: 'admin', name: 'Rita Admin', email: 'admin@ritorno.example' },
     { key: 'oakley', role: 'clinician', name: 'Dr Maren Oakley', email: 'maren.oakley@linden-clinic.example' },
