@@ -4,7 +4,7 @@ import type { Role } from '@/shared/schemas/role';
 import { isMailboxOff, useDevMailQuery } from './use-dev-mail';
 
 export interface NavItem {
-  href: '/caseload' | '/home' | '/students' | '/users' | '/mailbox';
+  href: '/caseload' | '/home' | '/students' | '/users' | '/mailbox' | '/sharing';
   label: string;
   icon: ComponentProps<typeof Ionicons>['name'];
   testID: string;
@@ -12,7 +12,10 @@ export interface NavItem {
 
 const byRole: Record<Role, NavItem[]> = {
   clinician: [{ href: '/caseload', label: 'Caseload', icon: 'people-outline', testID: 'nav-caseload' }],
-  musician: [{ href: '/home', label: 'Today', icon: 'musical-notes-outline', testID: 'nav-home' }],
+  musician: [
+    { href: '/home', label: 'Today', icon: 'musical-notes-outline', testID: 'nav-home' },
+    { href: '/sharing', label: 'Sharing', icon: 'share-social-outline', testID: 'nav-sharing' },
+  ],
   teacher: [{ href: '/students', label: 'Students', icon: 'school-outline', testID: 'nav-students' }],
   admin: [
     { href: '/users', label: 'Accounts', icon: 'person-circle-outline', testID: 'nav-users' },
