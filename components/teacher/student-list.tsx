@@ -1,25 +1,27 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
 import { spacing } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import { useStudentsQuery } from '@/hooks/use-students';
-import { useTheme } from '@/hooks/use-theme';
-import type { Student } from '@/shared/schemas/musician';
-import { Card } from '@/components/ui/card';
+import type { StudentSummary } from '@/shared/schemas/clearance';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Table, type TableColumn } from '@/components/ui/table';
 import { AppText } from '@/components/ui/text';
+import { EventCountdown } from './event-countdown';
+import { ReadinessBadge } from './readiness-badge';
+import { StudentCard } from './student-card';
+import { StudentNameLink } from './student-name-link';
 
-const columns: TableColumn<Student>[] = [
-  { key: 'name', header: 'Student', flex: 2, render: (student) => <AppText variant="bodyStrong">{student.name}</AppText> },
-  { key: 'instrument', header: 'Instrument', flex: 2, render: (student) => <AppText>{student.instrument}</AppText> },
+const columns: TableColumn<StudentSummary>[] = [
+  { key: 'name', header: 'Student', flex: 2, render: (student) => <StudentNameLink student={student} /> },
+  { key: 'instrument', header: 'Instrument', flex: 1.5, render: (student) => <AppText>{student.instrument}</AppText> },
+  { key: 'event', header: 'Event', flex: 3, render: (student) => <EventCountdown event={student.event} asOf={student.asOf} /> },
+  { key: 'readiness', header: 'Readiness', flex: 1.5, render: (student) => <ReadinessBadge readiness={student.readiness} /> },
 ];
 
-/** Students who shared their clearance with this teacher: names and instruments only. */
+/** Students who shared their clearance with this teacher: instrument, event and readiness in plain words. */
 export function StudentList() {
-  const { colors } = useTheme();
   const { isMedium } = useBreakpoints();
   const students = useStudentsQuery();
 
@@ -28,7 +30,7 @@ export function StudentList() {
   if (students.data.length === 0) {
     return (
       <EmptyState icon="school-outline" title="No students have shared with you yet" testID="students-empty">
-        When a student’s clinician shares their clearance with you, the student appears here.
+        When a student shares their playing clearance with you, they appear here.
       </EmptyState>
     );
   }
@@ -38,21 +40,12 @@ export function StudentList() {
     );
   }
   return (
-    <View style={styles.cards}>
+    <View style={styles.cards} testID="students-cards">
       {students.data.map((student) => (
-        <Card key={student.id} testID="student-row">
-          <AppText variant="heading">{student.name}</AppText>
-          <View style={styles.line}>
-            <Ionicons name="musical-note-outline" size={16} color={colors.textMuted} />
-            <AppText tone="muted">{student.instrument}</AppText>
-          </View>
-        </Card>
+        <StudentCard key={student.id} student={student} />
       ))}
     </View>
   );
 }
 
-const styles = StyleSheet.create({
-  cards: { gap: spacing.md },
-  line: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs },
-});
+const styles = StyleSheet.create({ cards: { gap: spacing.md } });

@@ -7,7 +7,7 @@ export default function StudentsScreen() {
     <Screen
       testID="screen-students"
       title="Your students"
-      lead="Students who are returning to playing after an injury and shared their progress with you."
+      lead="Students who shared their playing clearance with you. Open one to see what they may play now."
     >
       <StudentList />
       <Banner tone="info" title="What you will see here">

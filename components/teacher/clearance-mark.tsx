@@ -1,0 +1,41 @@
+import { StyleSheet, View } from 'react-native';
+import Ionicons from '@expo/vector-icons/Ionicons';
+import { spacing } from '@/constants/theme';
+import { useTheme } from '@/hooks/use-theme';
+import { formatPlanDate } from '@/lib/plan-dates';
+import { AppText } from '@/components/ui/text';
+
+export interface ClearanceMarkProps {
+  cleared: boolean;
+  expectedOn: string | null;
+  testID?: string;
+}
+
+/** Cleared or not yet, told by an icon and words; a not-yet date is labelled as a projection. */
+export function ClearanceMark({ cleared, expectedOn, testID }: ClearanceMarkProps) {
+  const { colors } = useTheme();
+  const text = cleared
+    ? 'Cleared now'
+    : expectedOn
+      ? `Not yet · projected ${formatPlanDate(expectedOn)}`
+      : 'Not yet · no date for now';
+  return (
+    <View style={styles.row} testID={testID}>
+      <Ionicons
+        name={cleared ? 'checkmark-circle' : 'ellipse-outline'}
+        size={18}
+        color={cleared ? colors.success : colors.textMuted}
+        style={styles.icon}
+      />
+      <AppText variant={cleared ? 'bodyStrong' : 'body'} tone={cleared ? 'success' : 'muted'} style={styles.text}>
+        {text}
+      </AppText>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xs },
+  icon: { marginTop: 3 },
+  text: { flexShrink: 1 },
+});
