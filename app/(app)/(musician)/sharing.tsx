@@ -1,0 +1,5 @@
+import { SharingView } from '@/components/sharing/sharing-view';
+
+export default function SharingScreen() {
+  return <SharingView />;
+}
