@@ -3,7 +3,10 @@
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { ensureChromium, startServer } from './harness.mjs';
-import { scenarios } from './scenarios.mjs';
+import { scenarios as roleScenarios } from './scenarios.mjs';
+import { teacherScenarios } from './teacher.scenarios.mjs';
+
+const scenarios = [...roleScenarios, ...teacherScenarios];
 
 const require = createRequire(path.join(process.cwd(), 'package.json'));
 const { chromium } = require('playwright-core');
