@@ -4,7 +4,7 @@ import type { Role } from '@/shared/schemas/role';
 import { isMailboxOff, useDevMailQuery } from './use-dev-mail';
 
 export interface NavItem {
-  href: '/caseload' | '/home' | '/students' | '/users' | '/mailbox' | '/sharing';
+  href: '/caseload' | '/home' | '/plan' | '/history' | '/students' | '/users' | '/mailbox' | '/sharing';
   label: string;
   icon: ComponentProps<typeof Ionicons>['name'];
   testID: string;
@@ -14,6 +14,8 @@ const byRole: Record<Role, NavItem[]> = {
   clinician: [{ href: '/caseload', label: 'Caseload', icon: 'people-outline', testID: 'nav-caseload' }],
   musician: [
     { href: '/home', label: 'Today', icon: 'musical-notes-outline', testID: 'nav-home' },
+    { href: '/plan', label: 'My plan', icon: 'trail-sign-outline', testID: 'nav-plan' },
+    { href: '/history', label: 'History', icon: 'stats-chart-outline', testID: 'nav-history' },
     { href: '/sharing', label: 'Sharing', icon: 'share-social-outline', testID: 'nav-sharing' },
   ],
   teacher: [{ href: '/students', label: 'Students', icon: 'school-outline', testID: 'nav-students' }],

@@ -32,7 +32,7 @@ export function NavLink({ item, active, compact = false }: NavLinkProps) {
         ])}
       >
         <Ionicons name={item.icon} size={20} color={active ? colors.primary : colors.textMuted} />
-        <AppText variant={active ? 'bodyStrong' : 'body'} tone={active ? 'primary' : 'default'}>
+        <AppText variant={compact ? 'label' : active ? 'bodyStrong' : 'body'} tone={active ? 'primary' : 'default'} numberOfLines={1}>
           {item.label}
         </AppText>
       </Pressable>
@@ -50,5 +50,6 @@ const styles = StyleSheet.create({
     borderRadius: radii.md,
     borderLeftWidth: 3,
   },
-  compact: { borderLeftWidth: 0, borderBottomWidth: 3, borderRadius: 0, paddingHorizontal: spacing.sm, gap: spacing.xs },
+  // Phones: equal tabs, icon over label, so four sections fit in 390 px without scrolling sideways.
+  compact: { flex: 1, flexDirection: 'column', justifyContent: 'center', borderLeftWidth: 0, borderBottomWidth: 3, borderRadius: 0, paddingHorizontal: spacing.xs, paddingVertical: spacing.xs, gap: 0 },
 });

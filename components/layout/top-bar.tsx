@@ -35,5 +35,5 @@ export function TopBar({ items }: TopBarProps) {
 const styles = StyleSheet.create({
   bar: { borderBottomWidth: 1, paddingHorizontal: spacing.lg, paddingTop: spacing.sm },
   row: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', paddingBottom: spacing.sm },
-  tabs: { flexDirection: 'row', gap: spacing.lg },
+  tabs: { flexDirection: 'row', gap: spacing.xs },
 });

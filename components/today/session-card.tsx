@@ -1,0 +1,62 @@
+import { StyleSheet, View } from 'react-native';
+import Ionicons from '@expo/vector-icons/Ionicons';
+import { spacing } from '@/constants/theme';
+import { useTheme } from '@/hooks/use-theme';
+import type { DaySession } from '@/shared/schemas/today';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { AppText } from '@/components/ui/text';
+import { itemLine } from './step-words';
+
+export interface SessionCardProps {
+  session: DaySession;
+  /** Only the first session not yet done may start. */
+  canStart: boolean;
+  onStart: () => void;
+}
+
+const icons = { gate: 'shield-checkmark-outline', warm_up: 'sunny-outline', play: 'musical-notes-outline', burst: 'flash-outline', rest: 'cafe-outline', cool_down: 'leaf-outline' } as const;
+
+/** One of today's sessions as its blocks, rests and checks, with the way to start it. */
+export function SessionCard({ session, canStart, onStart }: SessionCardProps) {
+  const { colors } = useTheme();
+  const label = `Session ${session.index + 1}`;
+  return (
+    <Card testID={`session-card-${session.index}`}>
+      <View style={styles.head}>
+        <AppText variant="heading" style={styles.flex}>{`${label} · ${session.startTime}`}</AppText>
+        {session.done ? <StatusBadge tone="success" icon="checkmark-circle" label="Done" testID={`session-done-${session.index}`} /> : null}
+      </View>
+      <AppText tone="muted">{`${session.playingMinutes} min of playing`}</AppText>
+      <View style={styles.items}>
+        {session.items.map((item) => (
+          <View key={`${item.kind}-${item.startMinute}-${item.gate?.position ?? ''}`} style={styles.item}>
+            <Ionicons name={icons[item.kind]} size={18} color={item.kind === 'rest' ? colors.info : colors.accent} />
+            <AppText variant={item.kind === 'gate' ? 'caption' : 'body'} tone={item.kind === 'gate' ? 'muted' : 'default'}>
+              {itemLine(item)}
+            </AppText>
+          </View>
+        ))}
+      </View>
+      {!session.done ? (
+        <Button
+          testID={`session-start-${session.index}`}
+          label={canStart ? `Start ${label.toLowerCase()}` : 'After the session before'}
+          accessibilityLabel={`Start ${label}`}
+          icon="play"
+          fullWidth
+          disabled={!canStart}
+          onPress={onStart}
+        />
+      ) : null}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, flexWrap: 'wrap' },
+  flex: { flex: 1 },
+  items: { gap: spacing.xs, paddingVertical: spacing.xs },
+  item: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
+});
