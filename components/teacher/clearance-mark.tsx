@@ -8,15 +8,17 @@ import { AppText } from '@/components/ui/text';
 export interface ClearanceMarkProps {
   cleared: boolean;
   expectedOn: string | null;
+  /** The view's own date: a projection already behind it is not shown as a date. */
+  asOf: string;
   testID?: string;
 }
 
 /** Cleared or not yet, told by an icon and words; a not-yet date is labelled as a projection. */
-export function ClearanceMark({ cleared, expectedOn, testID }: ClearanceMarkProps) {
+export function ClearanceMark({ cleared, expectedOn, asOf, testID }: ClearanceMarkProps) {
   const { colors } = useTheme();
   const text = cleared
     ? 'Cleared now'
-    : expectedOn
+    : expectedOn && expectedOn > asOf
       ? `Not yet · projected ${formatPlanDate(expectedOn)}`
       : 'Not yet · no date for now';
   return (

@@ -6,7 +6,7 @@ import { AppText } from '@/components/ui/text';
 import { ClearanceMark } from './clearance-mark';
 
 /** The demanding passages of one piece; they may be cleared later than the piece itself. */
-export function PassageLines({ passages }: { passages: PieceClearanceView['passages'] }) {
+export function PassageLines({ passages, asOf }: { passages: PieceClearanceView['passages']; asOf: string }) {
   if (passages.length === 0) {
     return (
       <AppText variant="caption" tone="muted">
@@ -19,7 +19,7 @@ export function PassageLines({ passages }: { passages: PieceClearanceView['passa
       {passages.map((passage) => (
         <View key={passage.bars} style={styles.item} testID="passage-line">
           <AppText variant="label">{`${passage.bars} (${demandsInWords(passage.demands)})`}</AppText>
-          <ClearanceMark cleared={passage.cleared} expectedOn={passage.expectedOn} />
+          <ClearanceMark cleared={passage.cleared} expectedOn={passage.expectedOn} asOf={asOf} />
         </View>
       ))}
     </View>

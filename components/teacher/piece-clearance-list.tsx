@@ -9,21 +9,27 @@ import { PassageLines } from './passage-lines';
 import { PieceCard } from './piece-card';
 import { PieceTitle } from './piece-title';
 
-const columns: TableColumn<PieceClearanceView>[] = [
+const columnsAsOf = (asOf: string): TableColumn<PieceClearanceView>[] => [
   { key: 'piece', header: 'Piece', flex: 3, render: (piece) => <PieceTitle piece={piece} /> },
-  { key: 'piece-status', header: 'Whole piece', flex: 2.5, render: (piece) => <ClearanceMark cleared={piece.cleared} expectedOn={piece.expectedOn} /> },
-  { key: 'passages', header: 'Demanding passages', flex: 3, render: (piece) => <PassageLines passages={piece.passages} /> },
+  {
+    key: 'piece-status',
+    header: 'Whole piece',
+    flex: 2.5,
+    render: (piece) => <ClearanceMark cleared={piece.cleared} expectedOn={piece.expectedOn} asOf={asOf} />,
+  },
+  { key: 'passages', header: 'Demanding passages', flex: 3, render: (piece) => <PassageLines passages={piece.passages} asOf={asOf} /> },
 ];
 
 export interface PieceClearanceListProps {
   pieces: readonly PieceClearanceView[];
+  asOf: string;
   label: string;
   empty: string;
   testID: string;
 }
 
 /** Pieces as a table on a wide screen and as cards on a phone. */
-export function PieceClearanceList({ pieces, label, empty, testID }: PieceClearanceListProps) {
+export function PieceClearanceList({ pieces, asOf, label, empty, testID }: PieceClearanceListProps) {
   const { isMedium } = useBreakpoints();
   if (pieces.length === 0) {
     return (
@@ -38,7 +44,7 @@ export function PieceClearanceList({ pieces, label, empty, testID }: PieceCleara
         testID={testID}
         rowTestID={`${testID}-row`}
         label={label}
-        columns={columns}
+        columns={columnsAsOf(asOf)}
         rows={pieces}
         rowKey={(piece) => `${piece.title}|${piece.composer}`}
       />
@@ -47,7 +53,7 @@ export function PieceClearanceList({ pieces, label, empty, testID }: PieceCleara
   return (
     <View style={styles.cards} testID={testID}>
       {pieces.map((piece) => (
-        <PieceCard key={`${piece.title}|${piece.composer}`} piece={piece} testID={`${testID}-row`} />
+        <PieceCard key={`${piece.title}|${piece.composer}`} piece={piece} asOf={asOf} testID={`${testID}-row`} />
       ))}
     </View>
   );

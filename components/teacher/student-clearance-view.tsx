@@ -54,13 +54,13 @@ export function StudentClearanceView({ studentId }: { studentId: string }) {
         <ClearanceLimits clearance={clearance} />
       </Section>
       <Section title="Cleared to play now">
-        <PieceClearanceList pieces={cleared} label="Pieces cleared now" empty="No pieces are cleared at the moment." testID="pieces-cleared" />
+        <PieceClearanceList pieces={cleared} asOf={clearance.asOf} label="Pieces cleared now" empty="No pieces are cleared at the moment." testID="pieces-cleared" />
       </Section>
       <Section
         title="Not yet cleared"
         description="Dates are projections from the current plan, not promises: they move if progress slows."
       >
-        <PieceClearanceList pieces={notYet} label="Pieces not yet cleared" empty="Every piece is cleared." testID="pieces-not-yet" />
+        <PieceClearanceList pieces={notYet} asOf={clearance.asOf} label="Pieces not yet cleared" empty="Every piece is cleared." testID="pieces-not-yet" />
       </Section>
       {clearance.event ? (
         <Section title={`Programme for ${clearance.event.name}`}>

@@ -77,6 +77,19 @@ describe('StudentClearanceView', () => {
     expect(screen.queryByText(/pain/i)).toBeNull();
   });
 
+  it('gives no date for a projection already behind the view’s own date', async () => {
+    const behind: StudentClearance = {
+      ...clearance,
+      pieces: [{ ...clearance.pieces[1]!, expectedOn: '2027-03-28' }],
+      programme: { total: 1, cleared: 0, fullyCleared: 0 },
+    };
+    mockApi({ 'GET /api/students/s-1': { status: 200, body: behind } });
+    renderScreen(<StudentClearanceView studentId="s-1" />);
+
+    expect(await screen.findByText('Not yet · no date for now')).toBeTruthy();
+    expect(screen.queryByText(/projected 28 Mar 2027/)).toBeNull();
+  });
+
   it('says the clearance is no longer shared when the server answers 404', async () => {
     mockApi({});
     renderScreen(<StudentClearanceView studentId="s-9" />);
