@@ -23,7 +23,7 @@ const browser = await chromium.launch({
 let passed = 0;
 let failed = 0;
 try {
-  for (const scenario of scenarios) {
+  for (const scenario of [...scenarios, ...musicianScenarios]) {
     for (const [size, viewport] of Object.entries(VIEWPORTS)) {
       if (scenario.sizes && !scenario.sizes.includes(size)) continue;
       const name = `${scenario.name} (${size} ${viewport.width}x${viewport.height})`;
