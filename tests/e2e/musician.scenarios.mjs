@@ -76,9 +76,10 @@ const onTrack = (email, sizes) => ({
 });
 
 export const musicianScenarios = [
-  // Ilse Varga is on track at the published levels: the phone run. Noor Haddad plays the same flow wide.
+  // Ilse Varga is on track at the published levels: the phone run. Caio Brandt (holding at his stage,
+  // still playing) runs the same flow wide; Noor Haddad is left to the teacher scenarios, which fail a gate.
   onTrack('ilse.varga@harbourside.example', ['phone']),
-  onTrack('noor.haddad@harbourside.example', ['wide']),
+  onTrack('caio.brandt@harbourside.example', ['wide']),
   {
     name: 'pain over the threshold in a gate stops the session, changes the plan and e-mails the clinician',
     sizes: ['phone'],

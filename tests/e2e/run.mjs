@@ -4,9 +4,10 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import { ensureChromium, startServer } from './harness.mjs';
 import { scenarios as roleScenarios } from './scenarios.mjs';
+import { musicianScenarios } from './musician.scenarios.mjs';
 import { teacherScenarios } from './teacher.scenarios.mjs';
 
-const scenarios = [...roleScenarios, ...teacherScenarios];
+const scenarios = [...roleScenarios, ...teacherScenarios, ...musicianScenarios];
 
 const require = createRequire(path.join(process.cwd(), 'package.json'));
 const { chromium } = require('playwright-core');
@@ -23,7 +24,7 @@ const browser = await chromium.launch({
 let passed = 0;
 let failed = 0;
 try {
-  for (const scenario of [...scenarios, ...musicianScenarios]) {
+  for (const scenario of scenarios) {
     for (const [size, viewport] of Object.entries(VIEWPORTS)) {
       if (scenario.sizes && !scenario.sizes.includes(size)) continue;
       const name = `${scenario.name} (${size} ${viewport.width}x${viewport.height})`;
