@@ -16,6 +16,7 @@ if (process.env.SKIP_WEB_BUILD !== '1') {
   }
 }
 
-const server = spawn('node_modules/.bin/tsx', ['server/index.ts'], { stdio: 'inherit', env: process.env });
+// One process (node with tsx as a loader), so signals reach the server itself.
+const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { stdio: 'inherit', env: process.env });
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
 server.on('exit', (code) => process.exit(code ?? 0));

@@ -41,7 +41,7 @@ export async function startServer() {
   buildWeb(webDir);
   const [port, smtpPort] = [await freePort(), await freePort()];
   const baseUrl = `http://127.0.0.1:${port}`;
-  const child = spawn('node_modules/.bin/tsx', ['server/index.ts'], {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     env: {
       ...process.env,
       NODE_ENV: 'development',
