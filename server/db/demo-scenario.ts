@@ -1,4 +1,5 @@
 import type { PieceInput } from '../../shared/schemas/piece';
+import type { CreateSetupItem } from '../../shared/schemas/setup';
 import type { PlanSettingsInput } from '../../shared/schemas/plan-settings';
 import type { Role } from '../../shared/schemas/role';
 import { addDays, isoWeekday, localDateOf, publishedLevelsPreset, toDay } from '../../shared/scheduler';
@@ -24,6 +25,9 @@ interface DemoMusician {
   sharedWith: string[];
   plan?: { settings: PlanSettingsInput; painDays: DemoPainDay[] };
   pieces: PieceInput[];
+  setup?: CreateSetupItem[];
+  notes?: string[];
+  problem?: { region: string; side: 'left' | 'right' | 'both' | 'midline'; onset: string };
 }
 
 const TIME_ZONE = 'Europe/London';
@@ -68,6 +72,12 @@ export function demoScenario(now: Date): { today: string; people: DemoPerson[]; 
       clinician: 'oakley',
       instrument: 'Clarinet',
       sharedWith: ['lenz'],
+      problem: { region: 'Right thumb and forearm', side: 'right', onset: 'Gradual, over a term of long rehearsals' },
+      notes: ['Thumb-rest moved higher; neck strap to take the weight. Review in two weeks.'],
+      setup: [
+        { kind: 'thumb_rest', label: 'Thumb rest raised one notch', instructions: 'Rest the thumb at the nail root, not the joint.', active: true },
+        { kind: 'strap', label: 'Neck strap on every session', instructions: 'Adjust so the mouthpiece meets you without reaching.', active: true },
+      ],
       plan: {
         settings: { ...common, startDate: addDays(today, -18), startMinutesPerDay: 15, targetMinutesPerDay: 75, failuresBeforeStepBack: 2 },
         painDays: [{ playingDaysAgo: 1, afterBlock: 2, pain: 3 }],

@@ -6,7 +6,7 @@ import type { Db } from './client';
 import { PieceSchema } from '../../shared/schemas/piece';
 import { PlanSettingsSchema } from '../../shared/schemas/plan-settings';
 import { demoHistory } from './demo-history';
-import { checkIns, clearanceShares, musicians, pieces, plans, user } from './schema';
+import { checkIns, clearanceShares, clinicalNotes, musicians, pieces, plans, setupItems, user } from './schema';
 import { DEMO_PASSWORD, demoScenario } from './demo-scenario';
 
 export interface SeededAccount {
@@ -48,6 +48,9 @@ export async function seedDemo(db: Db, auth: Auth, now: Date): Promise<{ passwor
           name: person?.name ?? entry.person,
           email: person?.email ?? '',
           instrument: entry.instrument,
+          problemRegion: entry.problem?.region,
+          problemSide: entry.problem?.side,
+          problemOnset: entry.problem?.onset,
           createdAt: now,
         })
         .run();
@@ -76,6 +79,12 @@ export async function seedDemo(db: Db, auth: Auth, now: Date): Promise<{ passwor
         tx.insert(pieces)
           .values({ id: randomUUID(), musicianId, title: piece.title, composer: piece.composer, tier: piece.tier, passages: piece.passages, onProgramme: piece.onProgramme, createdAt: now })
           .run();
+      }
+      for (const item of entry.setup ?? []) {
+        tx.insert(setupItems).values({ id: randomUUID(), musicianId, ...item, createdById: idOf(entry.clinician), createdAt: now }).run();
+      }
+      for (const body of entry.notes ?? []) {
+        tx.insert(clinicalNotes).values({ id: randomUUID(), musicianId, authorId: idOf(entry.clinician), body, createdAt: now }).run();
       }
       for (const teacher of entry.sharedWith) {
         tx.insert(clearanceShares).values({ id: randomUUID(), musicianId, teacherId: idOf(teacher), createdAt: now }).run();

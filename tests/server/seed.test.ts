@@ -21,6 +21,11 @@ describe('demo data', () => {
     expect(byName.get('Noor Haddad')).toMatchObject({ feasible: false });
     expect(byName.get('Ilse Varga')?.daysToEvent).toBe(52);
 
+    const caio = (caseload as unknown as { id: string; name: string }[]).find((entry) => entry.name === 'Caio Brandt');
+    const setup: { label: string; active: boolean }[] = (await clinician.get(`/api/musicians/${caio?.id}/setup`)).body;
+    expect(setup.map((item) => item.label).sort()).toEqual(['Neck strap on every session', 'Thumb rest raised one notch']);
+    expect((await clinician.get(`/api/musicians/${caio?.id}/notes`)).body).toHaveLength(1);
+
     const musician = await signedInAgent(ctx, 'caio.brandt@harbourside.example', seeded?.password);
     const home = (await musician.get('/api/me/musician')).body;
     // Seeded on Monday 1 Mar 2027, the demo's rest day is the Thursday after, so the latest session was on Sunday.
