@@ -87,9 +87,14 @@ export const teacherScenarios = [
 
       const admin = await (await page.context().browser().newContext({ viewport: page.viewportSize() })).newPage();
       await signIn(admin, baseUrl, 'admin@ritorno.example');
-      await admin.goto(`${baseUrl}/mailbox`, { waitUntil: 'networkidle' });
       const row = admin.getByTestId('mail-row').filter({ hasText: 'Playing clearance changed: Noor Haddad' }).filter({ hasText: 'dario.lenz' });
-      await visible(row);
+      // The fake mail server parses a message a moment after accepting it: look again before giving up.
+      for (let attempt = 1; ; attempt += 1) {
+        await admin.goto(`${baseUrl}/mailbox`, { waitUntil: 'networkidle' });
+        const found = await row.first().waitFor({ state: 'visible', timeout: 3_000 }).then(() => true, () => false);
+        if (found) break;
+        if (attempt === 5) throw new Error('no "Playing clearance changed" e-mail to dario.lenz in the development mailbox');
+      }
       await row.first().click();
       const body = await admin.getByTestId('mail-body').innerText({ timeout: TIMEOUT });
       if (!body.includes('nothing for the moment')) throw new Error(`the change e-mail does not show the smaller clearance:\n${body}`);
