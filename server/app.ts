@@ -4,6 +4,7 @@ import { toNodeHandler } from 'better-auth/node';
 import express from 'express';
 import helmet from 'helmet';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { signInLimit } from './middleware/sign-in-limit';
 import { adminRoutes } from './routes/admin.routes';
 import { calendarRoutes } from './routes/calendar.routes';
 import { checkInRoutes } from './routes/check-ins.routes';
@@ -39,6 +40,7 @@ export function createApp(deps: AppDeps): express.Express {
   );
 
   // better-auth reads the raw body, so it is mounted before express.json().
+  app.post('/api/auth/sign-in/email', signInLimit(deps.env.SIGN_IN_LIMIT_PER_MINUTE ?? 10));
   app.all('/api/auth/{*splat}', toNodeHandler(deps.auth));
   app.use(express.json({ limit: '100kb' }));
 

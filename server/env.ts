@@ -27,6 +27,8 @@ const EnvSchema = z.object({
   SMTP_URL: z.preprocess((value) => (value === '' ? undefined : value), z.url().optional()),
   MAIL_FROM: z.string().default('Ritorno <no-reply@ritorno.local>'),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  /** Sign-in attempts allowed per minute from one address. */
+  SIGN_IN_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(10),
   SEED_DEMO: z
     .enum(['true', 'false'])
     .default('true')

@@ -10,7 +10,7 @@ export interface AppDeps {
   db: Db;
   auth: Auth;
   mailer: Mailer;
-  env: Pick<Env, 'PUBLIC_URL' | 'NODE_ENV'>;
+  env: Pick<Env, 'PUBLIC_URL' | 'NODE_ENV'> & Partial<Pick<Env, 'SIGN_IN_LIMIT_PER_MINUTE'>>;
   now: () => Date;
   /** Where document files go: local disk, a hosted object store, or memory in tests. */
   storage: Storage;

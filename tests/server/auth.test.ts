@@ -59,3 +59,15 @@ describe('sign-in and roles', () => {
     expect(ctx.outbox).toEqual([]);
   });
 });
+
+describe('sign-in attempts', () => {
+  it('refuses the eleventh attempt in a minute from one address with 429', async () => {
+    const ctx = createTestContext();
+    await createAccount(ctx, 'clinician', 'wren@clinic.example');
+    const attempt = () => request(ctx.app).post('/api/auth/sign-in/email').send({ email: 'wren@clinic.example', password: 'guess-guess-guess' });
+    for (let i = 0; i < 10; i += 1) expect((await attempt()).status).toBe(401);
+    const limited = await attempt();
+    expect(limited.status).toBe(429);
+    expect(limited.body.error.code).toBe('too_many_attempts');
+  });
+});

@@ -37,6 +37,7 @@ export async function startRealServer(databasePath: string, options: { port?: nu
       FAKE_SMTP_PORT: String(await freePort()),
       WEB_DIR: path.join(path.dirname(databasePath), 'no-web'),
       SMTP_URL: '',
+      SIGN_IN_LIMIT_PER_MINUTE: '600',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
