@@ -117,7 +117,9 @@ export function createCheckInQueue(deps: CheckInQueueDeps): CheckInQueue {
       return clientKey;
     },
     flush() {
-      flushing ??= drain().finally(() => {
+      // A check-in queued while a drain is finishing would be missed by it: drain again afterwards.
+      if (flushing) return flushing.then(() => (pending.length > 0 && !retryScheduled ? queue.flush() : undefined));
+      flushing = drain().finally(() => {
         flushing = null;
       });
       return flushing;
