@@ -42,7 +42,7 @@ export function ClearanceLimits({ clearance }: { clearance: StudentClearance }) 
     );
   }
   return (
-    <View style={[styles.grid, !isMedium && styles.stack]} testID="clearance-limits">
+    <View style={isMedium ? styles.grid : styles.stack} testID="clearance-limits">
       {factsOf(clearance).map((fact) => (
         <View
           key={fact.key}
@@ -70,7 +70,7 @@ export function ClearanceLimits({ clearance }: { clearance: StudentClearance }) 
 const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   fact: { flexGrow: 1, flexBasis: 200, borderWidth: 1, borderRadius: radii.lg, padding: spacing.lg, gap: spacing.xs },
-  stack: { flexDirection: 'column', gap: spacing.sm },
+  stack: { gap: spacing.sm },
   factCompact: { flexBasis: 'auto', padding: spacing.md, gap: spacing.xxs },
   labelRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs },
 });
