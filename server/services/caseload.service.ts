@@ -1,8 +1,9 @@
 import { asc, desc, eq } from 'drizzle-orm';
-import { addDays, gateWhere, planSummary, progressionState, redFlagWords, spokenDate } from '../../shared/scheduler';
+import { addDays, gateWhere, planSummary, progressionState, redFlagWords, spokenDate, type PlanSummary } from '../../shared/scheduler';
 import type { CaseloadAlert, CaseloadEntry, CaseloadQuery } from '../../shared/schemas/musician';
 import type { Db } from '../db/client';
 import { checkIns, musicians } from '../db/schema';
+import { cachedPart, fingerprints, type CachedPart } from './caseload-cache';
 import { overThreshold } from './check-in.service';
 import { ownMusician, type MusicianRow } from './own-musician';
 import { loadActivePlan } from './plan.service';
@@ -21,9 +22,8 @@ function worstPain(checkIn: Loaded['checkIns'][number]): string {
 }
 
 /** What needs the clinician's attention, urgent first; every message comes from the engine's results. */
-function alertsFor(loaded: Loaded, now: Date): CaseloadAlert[] {
+function alertsFor(loaded: Loaded, summary: PlanSummary, now: Date): CaseloadAlert[] {
   const state = progressionState({ ...loaded, today: now });
-  const summary = planSummary({ ...loaded, today: now });
   const alerts: CaseloadAlert[] = [];
   if (state.stoppedSince) {
     alerts.push({
@@ -59,8 +59,28 @@ function alertsFor(loaded: Loaded, now: Date): CaseloadAlert[] {
   return alerts;
 }
 
-/** One caseload row: the plan overview, the status, the latest check-in and the alerts. */
-export function caseloadEntry(db: Db, row: MusicianRow, now: Date): CaseloadEntry {
+/** The engine's part of a row: the plan overview, the status, the latest check-in and the alerts. */
+function enginePart(db: Db, musicianId: string, now: Date): { part: CachedPart; timeZone: string | null } {
+  const last = db
+    .select({ date: checkIns.date })
+    .from(checkIns)
+    .where(eq(checkIns.musicianId, musicianId))
+    .orderBy(desc(checkIns.date))
+    .limit(1)
+    .get();
+  const lastCheckInDate = last?.date ?? null;
+  const loaded = loadActivePlan(db, musicianId);
+  if (!loaded) return { part: { plan: null, status: 'no_plan', lastCheckInDate, alerts: [] }, timeZone: null };
+  const summary = planSummary({ ...loaded, today: now });
+  const overview = toOverview(loaded.plan, summary);
+  return {
+    part: { plan: overview, status: overview.status, lastCheckInDate, alerts: alertsFor(loaded, summary, now) },
+    timeZone: loaded.settings.timeZone,
+  };
+}
+
+/** One caseload row; `fingerprint` (see caseload-cache.ts) lets an unchanged musician skip the engine. */
+export function caseloadEntry(db: Db, row: MusicianRow, now: Date, fingerprint?: string): CaseloadEntry {
   const base = {
     id: row.id,
     name: row.name,
@@ -69,17 +89,7 @@ export function caseloadEntry(db: Db, row: MusicianRow, now: Date): CaseloadEntr
     joined: row.userId !== null,
     createdAt: row.createdAt.toISOString(),
   };
-  const last = db
-    .select({ date: checkIns.date })
-    .from(checkIns)
-    .where(eq(checkIns.musicianId, row.id))
-    .orderBy(desc(checkIns.date))
-    .limit(1)
-    .get();
-  const loaded = loadActivePlan(db, row.id);
-  if (!loaded) return { ...base, plan: null, status: 'no_plan', lastCheckInDate: last?.date ?? null, alerts: [] };
-  const overview = toOverview(loaded.plan, planSummary({ ...loaded, today: now }));
-  return { ...base, plan: overview, status: overview.status, lastCheckInDate: last?.date ?? null, alerts: alertsFor(loaded, now) };
+  return { ...base, ...cachedPart(db, row.id, fingerprint, now, () => enginePart(db, row.id, now)) };
 }
 
 const urgency = (entry: CaseloadEntry) =>
@@ -95,13 +105,15 @@ const orders: Record<CaseloadQuery['sort'], (a: CaseloadEntry, b: CaseloadEntry)
 /** The clinician's caseload, by name unless asked otherwise (ties stay in name order). */
 export function listCaseload(db: Db, clinicianId: string, now: Date, query: CaseloadQuery = { sort: 'name' }): CaseloadEntry[] {
   const rows = db.select().from(musicians).where(eq(musicians.clinicianId, clinicianId)).orderBy(asc(musicians.name)).all();
+  const prints = fingerprints(db, { clinicianId });
   return rows
-    .map((row) => caseloadEntry(db, row, now))
+    .map((row) => caseloadEntry(db, row, now, prints.get(row.id)))
     .filter((entry) => !query.status || entry.status === query.status)
     .filter((entry) => query.alerts !== 'only' || entry.alerts.length > 0)
     .sort(orders[query.sort]);
 }
 
 export function getCaseloadEntry(db: Db, clinicianId: string, musicianId: string, now: Date): CaseloadEntry {
-  return caseloadEntry(db, ownMusician(db, clinicianId, musicianId), now);
+  const row = ownMusician(db, clinicianId, musicianId);
+  return caseloadEntry(db, row, now, fingerprints(db, { musicianId }).get(musicianId));
 }
