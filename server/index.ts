@@ -1,3 +1,4 @@
+import { setInterval, setTimeout } from 'node:timers';
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { createAuth } from './auth';

@@ -24,7 +24,9 @@ export const REMINDER_SECONDS = 10 * 60;
  */
 export function writeCalendar(input: { name: string; timeZone: string; sessions: CalendarSession[]; url?: string }): string {
   const calendar = ical({
-    name: input.name,
+    // ical-generator escapes ; , and \ in the name but not line breaks, which would end the property and
+    // let a typed name inject components: a calendar name has no use for control characters anyway.
+    name: input.name.replace(/[\u0000-\u001f\u007f]+/g, ' '),
     prodId: { company: 'Ritorno', product: 'Ritorno', language: 'EN' },
     timezone: { name: input.timeZone, generator: getVtimezoneComponent },
     ttl: 60 * 60,

@@ -40,19 +40,25 @@ export function clearanceAt(
   settings: PlanSettings,
   stageNumber: number,
   pieces: Piece[],
-  periods: Dated[],
+  periods: (Dated & { endDate?: string })[],
+  today?: string,
 ): PieceClearance[] {
+  // What is not cleared now is expected from today on: after a step back, the date the plan first
+  // reached a stage is history, not a projection.
+  const ahead = today ? periods.filter((p) => (p.endDate ?? p.startDate) >= today) : periods;
   return pieces.map((piece) => {
     const clearedFromStage = tierUnlock(settings, piece.tier);
     const passagesFromStage = passagesUnlock(settings, piece);
+    const cleared = stageNumber >= clearedFromStage;
+    const passagesCleared = passagesFromStage !== null && stageNumber >= passagesFromStage;
     return {
       piece,
       clearedFromStage,
       passagesFromStage,
-      cleared: stageNumber >= clearedFromStage,
-      passagesCleared: passagesFromStage !== null && stageNumber >= passagesFromStage,
-      expectedOn: dateOfStage(periods, clearedFromStage),
-      passagesExpectedOn: passagesFromStage === null ? null : dateOfStage(periods, passagesFromStage),
+      cleared,
+      passagesCleared,
+      expectedOn: dateOfStage(cleared ? periods : ahead, clearedFromStage),
+      passagesExpectedOn: passagesFromStage === null ? null : dateOfStage(passagesCleared ? periods : ahead, passagesFromStage),
     };
   });
 }

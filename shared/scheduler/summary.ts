@@ -68,7 +68,7 @@ export function planSummary(input: PlanSummaryInput): PlanSummary {
     targetReachedOn: state.feasibility.targetReachedOn,
     daysShort: state.feasibility.daysShort,
     redFlagActive: state.stoppedSince !== null,
-    repertoire: clearanceAt(settings, state.status === 'stopped' ? 0 : state.stageNumber, input.pieces, state.periods),
+    repertoire: clearanceAt(settings, state.status === 'stopped' ? 0 : state.stageNumber, input.pieces, state.periods, state.today),
     loadWarning: load.warning,
     lastChange: state.history.at(-1)?.message ?? null,
     prompts: [...state.prompts, ...(load.warning.message ? [load.warning.message] : [])],

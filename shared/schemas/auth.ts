@@ -19,7 +19,9 @@ export const PersonNameSchema = z
   .string({ error: 'Enter a name.' })
   .trim()
   .min(1, { error: 'Enter a name.' })
-  .max(120, { error: 'Keep the name under 120 characters.' });
+  .max(120, { error: 'Keep the name under 120 characters.' })
+  // Names travel into e-mail headers and calendar files, where a line break could forge content.
+  .regex(/^[^\u0000-\u001f\u007f]*$/, { error: 'Use a name without line breaks or control characters.' });
 
 export const SignInSchema = z.object({
   email: EmailSchema,

@@ -76,8 +76,14 @@ export const scenarios = [
 
       const admin = await newPage(page);
       await signIn(admin, baseUrl, 'admin@ritorno.example');
-      await admin.goto(`${baseUrl}/mailbox`, { waitUntil: 'networkidle' });
-      await admin.getByTestId('mail-row').filter({ hasText: email }).first().click();
+      // The e-mail goes through SMTP after the invitation is saved: look again until it is there.
+      const row = admin.getByTestId('mail-row').filter({ hasText: email }).first();
+      for (let attempt = 0; attempt < 10; attempt += 1) {
+        await admin.goto(`${baseUrl}/mailbox`, { waitUntil: 'networkidle' });
+        if (await row.isVisible()) break;
+        await admin.waitForTimeout(500);
+      }
+      await row.click();
       const body = await admin.getByTestId('mail-body').innerText({ timeout: TIMEOUT });
       const link = body.match(/https?:\/\/\S+\/invitation\/\S+/)?.[0];
       if (!link) throw new Error(`no invitation link in the e-mail:\n${body}`);

@@ -131,3 +131,20 @@ describe('weekly rest days in the calendar', () => {
     expect(restDates.length).toBeGreaterThanOrEqual(6);
   });
 });
+
+describe('text in calendar files', () => {
+  it('escapes what users typed so it cannot break out of its property (RFC 5545 3.3.11)', async () => {
+    const ctx = createTestContext();
+    ctx.clock.now = new Date('2027-10-25T08:00:00Z');
+    const hostile = 'Eve; Mallory,\nEND:VEVENT\nBEGIN:VEVENT\nSUMMARY:injected';
+    const fixture = await musicianWithPlan(ctx, { startDate: '2027-10-25', event: { name: 'Autumn recital', date: '2027-11-20' } });
+    const { musicians } = await import('@/server/db/schema');
+    const { eq } = await import('drizzle-orm');
+    ctx.db.update(musicians).set({ name: hostile }).where(eq(musicians.id, fixture.musicianId)).run();
+    const musician = await signedInAgent(ctx, fixture.email);
+    const { calendar, events } = parse((await musician.get('/api/calendar/download.ics')).text);
+    expect(calendar.getFirstPropertyValue('x-wr-calname')).toBe(`Ritorno: ${hostile.replaceAll('\n', ' ')}`);
+    expect(calendar.getAllSubcomponents('vcalendar')).toEqual([]);
+    expect(events.some(({ event }) => event.summary === 'injected')).toBe(false);
+  });
+});

@@ -113,3 +113,22 @@ describe('worked scenario: a red flag', () => {
     expect(sessionsForDate(settings, state, '2025-03-05').sessions).toEqual([]);
   });
 });
+
+describe('expected dates after a step back', () => {
+  it('never projects a piece that is not cleared now onto a date already past', () => {
+    const base = settingsWith({ startDate: '2027-03-01', event: { name: 'Recital', date: '2027-06-01' } });
+    const clean = followPlan(base, '2027-03-01', '2027-03-11');
+    const reached = progressionState({ settings: base, checkIns: clean, overrides: [], today: '2027-03-12' }).stageNumber;
+    expect(reached).toBeGreaterThanOrEqual(2);
+    // The moderate tier unlocks exactly at the stage reached, so the step back takes it away.
+    const settings = { ...base, tierUnlockStage: { easy: 1, moderate: reached, demanding: reached + 1 } };
+    const pieces: Piece[] = [{ title: 'Rondo', composer: '', tier: 'moderate', passages: [], onProgramme: true }];
+    const before = planSummary({ settings, checkIns: clean, overrides: [], pieces, today: '2027-03-12' });
+    expect(before.repertoire[0]?.cleared).toBe(true);
+    const after = planSummary({ settings, checkIns: [...clean, painfulSession('2027-03-12', 4)], overrides: [], pieces, today: '2027-03-13' });
+    expect(after.status).toBe('stepped_back');
+    expect(after.repertoire[0]?.cleared).toBe(false);
+    expect(after.repertoire[0]?.expectedOn).not.toBeNull();
+    expect((after.repertoire[0]?.expectedOn ?? '') >= '2027-03-13').toBe(true);
+  });
+});
