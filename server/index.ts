@@ -1,4 +1,3 @@
-import { setInterval, setTimeout } from 'node:timers';
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { createAuth } from './auth';
@@ -44,7 +43,6 @@ async function main() {
     syncAllClearanceNotices(clearanceDeps, new Date()).catch((error: unknown) => console.error('[clearance] sync failed:', error));
   void syncClearance();
   const clearanceTimer = setInterval(syncClearance, 60 * 60 * 1000);
-  clearanceTimer.unref();
 
   const summaryJob = startWeeklySummaryJob({ db, mailer, publicUrl: env.PUBLIC_URL, pattern: env.SUMMARY_CRON, timeZone: env.SUMMARY_TIME_ZONE });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
@@ -65,7 +63,7 @@ async function main() {
       db.$client.close();
       process.exit(0);
     });
-    setTimeout(() => process.exit(1), 5000).unref();
+    setTimeout(() => process.exit(1), 5000);
   };
   process.on('SIGTERM', () => shutdown('SIGTERM'));
   process.on('SIGINT', () => shutdown('SIGINT'));
