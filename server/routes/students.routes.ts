@@ -24,7 +24,9 @@ export function studentRoutes({ auth, db, now }: AppDeps): Router {
   // A dated note for rehearsals: what is cleared and the limits, printable from the browser.
   router.get('/:id/print', (req, res) => {
     const { id } = IdParams.parse(req.params);
-    res.type('html').send(clearanceNoteHtml(studentClearance(db, currentUser(res.locals).id, id, now())));
+    // Built before the content type is set, so a refusal still answers as JSON.
+    const html = clearanceNoteHtml(studentClearance(db, currentUser(res.locals).id, id, now()));
+    res.type('html').send(html);
   });
 
   return router;

@@ -3,6 +3,8 @@ import { count } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { invitations, musicians, plans } from '@/server/db/schema';
 import { PlanSettingsSchema } from '@/shared/schemas/plan-settings';
+import { databaseChecksum } from './support/db-checksum';
+import { listRoutes } from './support/routes';
 import { createAccount, createTestContext, signedInAgent, type TestContext } from './support/test-app';
 
 type Caller = 'anonymous' | 'clinician' | 'otherClinician' | 'musician' | 'teacher' | 'admin';
@@ -13,10 +15,17 @@ interface Ids {
   planned: string;
   /** A private document of ownMusician. */
   privateDoc: string;
+  /** Two drafts of ownMusician's plan (one edited and deleted, one activated last), a piece, a setup item. */
+  draft: string;
+  draftToActivate: string;
+  piece: string;
+  setupItem: string;
+  /** A teacher the musician does not share with. */
+  teacher: string;
 }
 
 interface Row {
-  method: 'get' | 'post' | 'patch';
+  method: 'get' | 'post' | 'patch' | 'delete';
   path: (ids: Ids) => string;
   body?: (caller: Caller) => object;
   expect: Record<Caller, number>;
@@ -56,7 +65,41 @@ const recordRows: Row[] = [
 ];
 
 // Who may call what. 404 for another clinician's musician: their existence is not revealed.
+const everyone = (status: number) => ({ anonymous: status, clinician: status, otherClinician: status, musician: status, teacher: status, admin: status });
+const musicianOnly = (ok: number) => ({ anonymous: 401, clinician: 403, otherClinician: 403, musician: ok, teacher: 403, admin: 403 });
+
+// Public routes, where a secret in the link is the credential: an unknown one is not found for anyone.
+const publicRows: Row[] = [
+  { method: 'get', path: () => '/api/health', expect: everyone(200) },
+  { method: 'get', path: () => '/api/calendar/feeds/unknown-feed-token-000000.ics', expect: everyone(404) },
+  { method: 'get', path: () => '/api/invitations/by-token/unknown-invitation-token-0000', expect: everyone(404) },
+  { method: 'post', path: () => '/api/invitations/by-token/unknown-invitation-token-0000/accept', body: () => ({ password: 'correct-horse-battery' }), expect: everyone(404) },
+];
+
+// Rows that change what later rows see run last, in this order.
+const changingRows: Row[] = [
+  { method: 'post', path: () => '/api/calendar/feed', expect: musicianOnly(201) },
+  { method: 'get', path: ({ teacher }) => `/api/students/${teacher}/print`, expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 404, admin: 403 } },
+  { method: 'get', path: () => '/api/admin/mail/unknown-message', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 404 } },
+  { method: 'delete', path: ({ teacher }) => `/api/shares/teachers/${teacher}`, expect: musicianOnly(404) },
+  { method: 'delete', path: () => '/api/shares/invitations/nobody%40school.example', expect: musicianOnly(404) },
+  { method: 'get', path: ({ ownMusician, draft }) => `/api/musicians/${ownMusician}/plans/${draft}`, expect: clinicianOnly(200) },
+  { method: 'patch', path: ({ ownMusician, draft }) => `/api/musicians/${ownMusician}/plans/${draft}`, body: () => settings, expect: clinicianOnly(200) },
+  { method: 'post', path: ({ planned }) => `/api/musicians/${planned}/plan/overrides`, body: () => ({ action: 'hold', reason: 'Reviewing grip' }), expect: clinicianOnly(201) },
+  { method: 'patch', path: ({ ownMusician, piece }) => `/api/musicians/${ownMusician}/pieces/${piece}`, body: () => ({ title: 'Etude in D' }), expect: clinicianOnly(200) },
+  { method: 'patch', path: ({ ownMusician, setupItem }) => `/api/musicians/${ownMusician}/setup/${setupItem}`, body: () => ({ active: false }), expect: clinicianOnly(200) },
+  // A JSON body is not an upload: the clinician reaches the upload's own validation, nothing is stored.
+  { method: 'post', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/documents`, body: () => ({ title: 'No file' }), expect: clinicianOnly(422) },
+  { method: 'patch', path: ({ ownMusician, privateDoc }) => `/api/musicians/${ownMusician}/documents/${privateDoc}`, body: () => ({ visibility: 'private' }), expect: clinicianOnly(200) },
+  { method: 'delete', path: ({ ownMusician, draft }) => `/api/musicians/${ownMusician}/plans/${draft}`, expect: clinicianOnly(204) },
+  { method: 'delete', path: ({ ownMusician, piece }) => `/api/musicians/${ownMusician}/pieces/${piece}`, expect: clinicianOnly(204) },
+  { method: 'delete', path: ({ ownMusician, setupItem }) => `/api/musicians/${ownMusician}/setup/${setupItem}`, expect: clinicianOnly(204) },
+  { method: 'delete', path: ({ ownMusician, privateDoc }) => `/api/musicians/${ownMusician}/documents/${privateDoc}`, expect: clinicianOnly(204) },
+  { method: 'post', path: ({ ownMusician, draftToActivate }) => `/api/musicians/${ownMusician}/plans/${draftToActivate}/activate`, expect: clinicianOnly(200) },
+];
+
 const matrix: Row[] = [
+  ...publicRows,
   { method: 'get', path: () => '/api/me', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 200, teacher: 200, admin: 200 } },
   { method: 'get', path: () => '/api/me/musician', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 200, teacher: 403, admin: 403 } },
   { method: 'get', path: () => '/api/musicians', expect: { anonymous: 401, clinician: 200, otherClinician: 200, musician: 403, teacher: 403, admin: 403 } },
@@ -79,6 +122,7 @@ const matrix: Row[] = [
   { method: 'get', path: () => '/api/admin/users', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
   { method: 'get', path: () => '/api/admin/mail', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
   ...recordRows,
+  ...changingRows,
 ];
 
 describe('who may call what', () => {
@@ -90,7 +134,7 @@ describe('who may call what', () => {
     ctx = createTestContext({ devMailbox: true });
     const wrenId = await createAccount(ctx, 'clinician', 'wren@clinic.example');
     await createAccount(ctx, 'clinician', 'odile@clinic.example');
-    await createAccount(ctx, 'teacher', 'ruth@school.example');
+    const teacher = await createAccount(ctx, 'teacher', 'ruth@school.example');
     await createAccount(ctx, 'admin', 'admin@ritorno.example');
     const wren = await signedInAgent(ctx, 'wren@clinic.example');
     const invited = await wren
@@ -102,7 +146,11 @@ describe('who may call what', () => {
     const active = PlanSettingsSchema.parse({ startDate: '2027-02-22', event: { name: 'Recital', date: '2027-05-01' } });
     ctx.db.insert(plans).values({ id: randomUUID(), musicianId: planned, version: 1, status: 'active', settings: active, createdById: wrenId, createdAt: ctx.clock.now, activatedAt: ctx.clock.now }).run();
     const doc = await wren.post(`/api/musicians/${ownMusician}/documents`).field('title', 'Letter').attach('file', Buffer.from('%PDF-1.4 letter'), 'letter.pdf').expect(201);
-    ids = { ownMusician, planned, privateDoc: doc.body.id };
+    const draft = (await wren.post(`/api/musicians/${ownMusician}/plans`).send(settings).expect(201)).body.id;
+    const draftToActivate = (await wren.post(`/api/musicians/${ownMusician}/plans`).send(settings).expect(201)).body.id;
+    const piece = (await wren.post(`/api/musicians/${ownMusician}/pieces`).send({ title: 'Etude', tier: 'easy' }).expect(201)).body.id;
+    const setupItem = (await wren.post(`/api/musicians/${ownMusician}/setup`).send({ kind: 'strap', label: 'Neck strap' }).expect(201)).body.id;
+    ids = { ownMusician, planned, privateDoc: doc.body.id, draft, draftToActivate, piece, setupItem, teacher };
     const token = ctx.outbox[0]?.text.match(/invitation\/(\S+)/)?.[1];
     await request(ctx.app).post(`/api/invitations/by-token/${token}/accept`).send({ password: 'correct-horse-battery' }).expect(201);
     agents = {
@@ -117,19 +165,27 @@ describe('who may call what', () => {
 
   for (const row of matrix) {
     for (const [caller, status] of Object.entries(row.expect) as [Caller, number][]) {
-      it(`answers ${status} to ${caller} for ${row.method.toUpperCase()} ${row.path({ ownMusician: ':id', planned: ':planned', privateDoc: ':doc' })}`, async () => {
-        const before = ctx.db.select({ n: count() }).from(invitations).get()?.n;
+      it(`answers ${status} to ${caller} for ${row.method.toUpperCase()} ${row.path({ ownMusician: ':id', planned: ':planned', privateDoc: ':doc', draft: ':draft', draftToActivate: ':draft', piece: ':piece', setupItem: ':item', teacher: ':teacher' })}`, async () => {
+        const before = databaseChecksum(ctx.db);
         const call = agents[caller][row.method](row.path(ids));
         const response = row.body ? await call.send(row.body(caller)) : await call;
         expect(response.status).toBe(status);
-        const after = ctx.db.select({ n: count() }).from(invitations).get()?.n;
         if (status >= 400) {
           expect(response.body.error.code).toEqual(expect.any(String));
-          expect(after).toBe(before);
+          expect(databaseChecksum(ctx.db)).toBe(before);
         }
       });
     }
   }
+
+  it('has a row for every route the server really serves', () => {
+    const toRegex = (pattern: string) => new RegExp(`^${pattern.replace(/[.]/g, '\\.').replace(/:[A-Za-z]+/g, '[^/]+')}$`);
+    const concrete = matrix.map((row) => ({ method: row.method.toUpperCase(), path: row.path(ids) }));
+    const missing = listRoutes(ctx.app)
+      .filter((route) => !concrete.some((row) => row.method === route.method && toRegex(route.path).test(row.path)))
+      .map((route) => `${route.method} ${route.path}`);
+    expect(missing).toEqual([]);
+  });
 
   it('writes nothing when the input is malformed, and names the fields', async () => {
     const before = ctx.db.select({ n: count() }).from(musicians).get()?.n;
