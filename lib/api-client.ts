@@ -63,6 +63,11 @@ export async function api<S extends z.ZodType>(path: string, options: RequestOpt
   } catch {
     throw new ApiError(0, 'network', 'We could not reach Ritorno. Check your connection and try again.');
   }
+  return readResult(response, options.schema);
+}
+
+/** Checks the status and parses the body with the schema: shared by `api` and `apiUpload`. */
+async function readResult<S extends z.ZodType>(response: Response, schema: S): Promise<z.output<S>> {
   const json = await readJson(response);
   if (!response.ok) {
     const parsed = ApiErrorBodySchema.safeParse(json);
@@ -72,9 +77,37 @@ export async function api<S extends z.ZodType>(path: string, options: RequestOpt
     }
     throw new ApiError(response.status, 'unexpected', `The server answered with status ${response.status}.`);
   }
-  const result = options.schema.safeParse(json);
+  const result = schema.safeParse(json);
   if (!result.success) {
     throw new ApiError(response.status, 'bad_response', 'The server sent data this version of the app does not understand.');
   }
   return result.data;
+}
+
+/** Sizes and types the server refuses, in words a person can act on. */
+const uploadRefusals: Record<number, string> = {
+  413: 'The file is larger than 10 MB. Nothing was stored; reduce it (or scan at a lower resolution) and try again.',
+  415: 'Only PDF, PNG, JPEG or WebP files can be attached, checked by their content. Nothing was stored.',
+};
+
+/** Multipart upload (documents): the browser sets the boundary, so no Content-Type header is sent. */
+export async function apiUpload<S extends z.ZodType>(path: string, options: { schema: S; body: FormData }): Promise<z.output<S>> {
+  let response: Response;
+  try {
+    response = await fetch(`${apiBaseUrl()}${path}`, {
+      method: 'POST',
+      credentials: 'include',
+      headers: { Accept: 'application/json' },
+      body: options.body,
+    });
+  } catch {
+    throw new ApiError(0, 'network', 'We could not reach Ritorno. Check your connection and try again.');
+  }
+  try {
+    return await readResult(response, options.schema);
+  } catch (error) {
+    const refusal = uploadRefusals[response.status];
+    if (refusal && isApiError(error)) throw new ApiError(error.status, error.code, refusal, error.issues);
+    throw error;
+  }
 }

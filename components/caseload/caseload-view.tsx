@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
@@ -5,13 +6,18 @@ import { Card } from '@/components/ui/card';
 import { CautionCard } from '@/components/ui/caution-card';
 import { Screen } from '@/components/ui/screen';
 import { Section } from '@/components/ui/section';
+import { CaseloadControls, type CaseloadShow } from './caseload-controls';
 import { CaseloadList } from './caseload-list';
 import { InvitationList } from './invitation-list';
 import { InviteForm } from './invite-form';
+import { SendSummaryButton } from './send-summary-button';
+import type { CaseloadSort } from './sort-caseload';
 
 /** The clinician's landing screen: who is in the caseload, and inviting more people. Two panes when wide. */
 export function CaseloadView() {
   const { isWide } = useBreakpoints();
+  const [sort, setSort] = useState<CaseloadSort>('alerts');
+  const [show, setShow] = useState<CaseloadShow>('all');
   const invite = (
     <Section
       title="Invite someone"
@@ -26,20 +32,19 @@ export function CaseloadView() {
     <Screen
       testID="screen-caseload"
       title="Your caseload"
-      lead="Musicians you look after. Invite a musician to add them here; once they join you can prepare their plan."
+      lead="Musicians you look after, those needing attention first. Open a record to see check-ins, adjust the plan or add notes."
+      actions={<SendSummaryButton />}
       footer={<CautionCard audience="clinician" />}
     >
+      <Section title="Musicians">
+        <CaseloadControls sort={sort} show={show} onSort={setSort} onShow={setShow} />
+        <CaseloadList sort={sort} show={show} />
+      </Section>
       <View style={[styles.panes, isWide && styles.panesWide]}>
-        <View style={[styles.main, isWide && styles.mainWide]}>
-          <Section title="Musicians">
-            <CaseloadList />
-          </Section>
-          {isWide ? null : invite}
-          <Section title="Sent invitations">
-            <InvitationList />
-          </Section>
-        </View>
-        {isWide ? <View style={styles.side}>{invite}</View> : null}
+        <View style={isWide ? styles.side : undefined}>{invite}</View>
+        <Section title="Sent invitations" style={isWide ? styles.mainWide : undefined}>
+          <InvitationList />
+        </Section>
       </View>
     </Screen>
   );
@@ -48,7 +53,6 @@ export function CaseloadView() {
 const styles = StyleSheet.create({
   panes: { gap: spacing.xl },
   panesWide: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xxl },
-  main: { gap: spacing.xl },
   mainWide: { flex: 1, minWidth: 0 },
-  side: { width: 340 },
+  side: { width: 380 },
 });

@@ -2,9 +2,9 @@ import { StyleSheet, View } from 'react-native';
 import { spacing } from '@/constants/theme';
 import type { CaseloadEntry } from '@/shared/schemas/musician';
 import { AppText } from '@/components/ui/text';
-import { ProgressionBadge } from '@/components/plan/progression-badge';
+import { CaseloadStatusBadge } from './caseload-status-badge';
 
-/** A musician's plan in one glance for the caseload: stage, state, and whether the event is in reach. */
+/** A musician's plan in one glance for the caseload: stage and status in words. */
 export function PlanCell({ entry }: { entry: CaseloadEntry }) {
   const plan = entry.plan;
   if (!plan) {
@@ -16,13 +16,10 @@ export function PlanCell({ entry }: { entry: CaseloadEntry }) {
   }
   return (
     <View style={styles.cell}>
-      <ProgressionBadge plan={plan} />
+      <CaseloadStatusBadge status={entry.status} />
       <AppText variant="caption" tone="muted">
         {`Stage ${plan.stageNumber} of ${plan.stageCount} · ${plan.minutesPerDay} min a day`}
       </AppText>
-      {plan.feasible ? null : (
-        <AppText variant="caption" tone="warning">{`Target ${plan.daysShort} days after ${plan.event.name}`}</AppText>
-      )}
     </View>
   );
 }

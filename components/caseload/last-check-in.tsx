@@ -1,0 +1,10 @@
+import { format, parseISO } from 'date-fns';
+import { AppText } from '@/components/ui/text';
+
+export function LastCheckIn({ date }: { date: string | null }) {
+  return (
+    <AppText variant="caption" tone={date ? 'default' : 'muted'}>
+      {date ? format(parseISO(date), 'EEE d MMM') : 'No check-in yet'}
+    </AppText>
+  );
+}
