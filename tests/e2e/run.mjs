@@ -6,8 +6,10 @@ import { ensureChromium, startServer } from './harness.mjs';
 import { scenarios as roleScenarios } from './scenarios.mjs';
 import { musicianScenarios } from './musician.scenarios.mjs';
 import { teacherScenarios } from './teacher.scenarios.mjs';
+import { clinicianScenarios } from './clinician.scenarios.mjs';
 
-const scenarios = [...roleScenarios, ...teacherScenarios, ...musicianScenarios];
+// The clinician's run last: it activates a new plan version for a musician other scenarios read.
+const scenarios = [...roleScenarios, ...teacherScenarios, ...musicianScenarios, ...clinicianScenarios];
 
 const require = createRequire(path.join(process.cwd(), 'package.json'));
 const { chromium } = require('playwright-core');
