@@ -1,0 +1,31 @@
+// Runs Lighthouse in plain Node: under tsx, esbuild's name helper leaks into the functions Lighthouse
+// sends to the page (`__name is not defined`). Usage: node lighthouse-run.mjs <url> [cookie]; prints scores.
+import * as chromeLauncher from 'chrome-launcher';
+import lighthouse from 'lighthouse';
+
+const [url, cookie] = process.argv.slice(2);
+const chrome = await chromeLauncher.launch({
+  chromePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
+  chromeFlags: ['--headless=new', '--no-sandbox', '--disable-gpu', '--disable-dev-shm-usage'],
+});
+try {
+  const result = await lighthouse(url, {
+    port: chrome.port,
+    output: 'json',
+    logLevel: 'error',
+    onlyCategories: ['performance', 'accessibility'],
+    ...(cookie ? { extraHeaders: { Cookie: cookie } } : {}),
+  });
+  const lhr = result?.lhr;
+  const failing = Object.values(lhr?.audits ?? {})
+    .filter((audit) => audit.score !== null && audit.score < 0.9 && audit.scoreDisplayMode !== 'informative' && audit.scoreDisplayMode !== 'notApplicable')
+    .map((audit) => audit.id);
+  console.log(JSON.stringify({
+    performance: Math.round((lhr?.categories.performance?.score ?? 0) * 100),
+    accessibility: Math.round((lhr?.categories.accessibility?.score ?? 0) * 100),
+    finalUrl: lhr?.finalDisplayedUrl,
+    failing,
+  }));
+} finally {
+  await chrome.kill();
+}

@@ -1,0 +1,8 @@
+// The few parts of autocannon 9 the API bench uses (the package ships no types).
+declare module 'autocannon' {
+  interface Options { url: string; connections?: number; duration?: number; headers?: Record<string, string> }
+  interface Histogram { average: number; p50: number; p99: number }
+  interface Result { requests: Histogram; latency: Histogram; non2xx: number; errors: number; timeouts: number }
+  function autocannon(options: Options): Promise<Result>;
+  export default autocannon;
+}
