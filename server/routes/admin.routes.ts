@@ -6,6 +6,7 @@ import type { UserSummary } from '../../shared/schemas/user';
 import { user } from '../db/schema';
 import { notFound } from '../lib/http-error';
 import { requireRole, requireSession } from '../middleware/auth';
+import { fullTrail } from '../services/audit-trail.service';
 import type { AppDeps } from './deps';
 
 const IdParams = z.object({ id: z.string().min(1).max(100) });
@@ -24,6 +25,10 @@ export function adminRoutes({ auth, db, devMailbox }: AppDeps): Router {
       createdAt: row.createdAt.toISOString(),
     }));
     res.json(users);
+  });
+
+  router.get('/audit', (_req, res) => {
+    res.json(fullTrail(db));
   });
 
   // The development mailbox exists only while the local fake SMTP server is in use.

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import { CaseloadQuerySchema } from '../../shared/schemas/musician';
 import { currentUser, requireRole, requireSession } from '../middleware/auth';
+import { auditRecordReads } from '../middleware/audit-reads';
+import { musicianTrail } from '../services/audit-trail.service';
 import { getCaseloadEntry, listCaseload } from '../services/caseload.service';
 import type { AppDeps } from './deps';
 import { documentRoutes } from './documents.routes';
@@ -24,6 +26,14 @@ export function musicianRoutes(deps: AppDeps): Router {
   router.get('/', (req, res) => {
     const query = CaseloadQuerySchema.parse(req.query);
     res.json(listCaseload(db, currentUser(res.locals).id, now(), query));
+  });
+
+  router.use('/:id', auditRecordReads(db, now));
+
+  router.get('/:id/audit', (req, res) => {
+    const { id } = paramsOf(req, 'id');
+    getCaseloadEntry(db, currentUser(res.locals).id, id, now());
+    res.json(musicianTrail(db, id));
   });
 
   router.get('/:id', (req, res) => {

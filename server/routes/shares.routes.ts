@@ -5,6 +5,7 @@ import { invitationMail, sharedWithYouMail } from '../lib/mail-templates';
 import { sendInBackground } from '../lib/mailer';
 import { currentUser, requireRole, requireSession } from '../middleware/auth';
 import { validateBody } from '../middleware/validate';
+import { audit } from '../services/audit';
 import { syncClearanceNotices } from '../services/clearance-notice.service';
 import { getMusicianByUser, getOwnMusician } from '../services/musician.service';
 import { listShares, shareWithTeacher, stopSharing, withdrawInvitation } from '../services/share.service';
@@ -31,6 +32,7 @@ export function shareRoutes({ auth, db, mailer, env, now }: AppDeps): Router {
     const input = req.body as CreateShare;
     const at = now();
     const outcome = shareWithTeacher(db, { id: musician.id, userId: me.id }, input, at);
+    audit(db, { actorId: me.id, action: outcome.kind === 'shared' ? 'share.created' : 'share.invited', musicianId: musician.id, detail: { email: input.email }, at });
     if (outcome.kind === 'invited') {
       const link = `${env.PUBLIC_URL}/invitation/${outcome.token}`;
       const expiresAt = new Date(at.getTime() + 7 * 24 * 3600 * 1000);
@@ -45,13 +47,17 @@ export function shareRoutes({ auth, db, mailer, env, now }: AppDeps): Router {
 
   router.delete('/teachers/:teacherId', (req, res) => {
     const { teacherId } = TeacherParams.parse(req.params);
-    stopSharing(db, self(res.locals).musician.id, teacherId);
+    const { me, musician } = self(res.locals);
+    stopSharing(db, musician.id, teacherId);
+    audit(db, { actorId: me.id, action: 'share.stopped', musicianId: musician.id, detail: { teacherId }, at: now() });
     res.status(204).end();
   });
 
   router.delete('/invitations/:email', (req, res) => {
     const { email } = EmailParams.parse(req.params);
-    withdrawInvitation(db, self(res.locals).musician.id, email.toLowerCase());
+    const { me, musician } = self(res.locals);
+    withdrawInvitation(db, musician.id, email.toLowerCase());
+    audit(db, { actorId: me.id, action: 'share.invitation_withdrawn', musicianId: musician.id, detail: { email }, at: now() });
     res.status(204).end();
   });
 

@@ -7,6 +7,7 @@ async function signIn(page, baseUrl, email, password = PASSWORD) {
   await page.getByTestId('sign-in-email').fill(email);
   await page.getByTestId('sign-in-password').fill(password);
   await page.getByTestId('sign-in-submit').click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: TIMEOUT });
 }
 
 async function expectScreen(page, testId, { shows = [], hides = [] }) {

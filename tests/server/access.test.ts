@@ -120,6 +120,8 @@ const matrix: Row[] = [
   { method: 'get', path: ({ ownMusician }) => `/api/students/${ownMusician}`, expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 404, admin: 403 } },
   { method: 'get', path: () => '/api/students', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 200, admin: 403 } },
   { method: 'get', path: () => '/api/admin/users', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
+  { method: 'get', path: () => '/api/admin/audit', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
+  { method: 'get', path: ({ ownMusician }) => `/api/musicians/${ownMusician}/audit`, expect: clinicianOnly(200) },
   { method: 'get', path: () => '/api/admin/mail', expect: { anonymous: 401, clinician: 403, otherClinician: 403, musician: 403, teacher: 403, admin: 200 } },
   ...recordRows,
   ...changingRows,
