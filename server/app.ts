@@ -4,6 +4,8 @@ import { toNodeHandler } from 'better-auth/node';
 import express from 'express';
 import helmet from 'helmet';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { trustedOrigins } from './lib/origins';
+import { sameOriginWrites } from './middleware/same-origin';
 import { signInLimit } from './middleware/sign-in-limit';
 import { adminRoutes } from './routes/admin.routes';
 import { calendarRoutes } from './routes/calendar.routes';
@@ -43,6 +45,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.post('/api/auth/sign-in/email', signInLimit(deps.env.SIGN_IN_LIMIT_PER_MINUTE ?? 10));
   app.all('/api/auth/{*splat}', toNodeHandler(deps.auth));
   app.use(express.json({ limit: '100kb' }));
+  app.use('/api', sameOriginWrites(trustedOrigins(deps.env)));
 
   app.get('/api/health', (_req, res) => {
     res.json({ ok: true });

@@ -9,6 +9,7 @@ import * as schema from './db/schema';
 import type { Env } from './env';
 import { sendInBackground, type Mailer } from './lib/mailer';
 import { passwordResetMail } from './lib/mail-templates';
+import { trustedOrigins } from './lib/origins';
 
 const ac = createAccessControl(defaultStatements);
 const noUserAdministration = ac.newRole({ user: [], session: [] });
@@ -30,7 +31,7 @@ export function createAuth({ db, env, mailer }: AuthDeps) {
     baseURL: env.PUBLIC_URL,
     basePath: '/api/auth',
     secret: env.AUTH_SECRET,
-    trustedOrigins: [env.PUBLIC_URL, 'http://localhost:8081'],
+    trustedOrigins: trustedOrigins(env),
     database: drizzleAdapter(db, {
       provider: 'sqlite',
       schema: { user: schema.user, session: schema.session, account: schema.account, verification: schema.verification },

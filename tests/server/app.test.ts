@@ -42,3 +42,23 @@ describe('the server shell', () => {
     expect((await request(app).get('/api/nope')).status).toBe(404);
   });
 });
+
+describe('cross-site requests', () => {
+  it('refuses a cookie-authenticated write from another site and writes nothing', async () => {
+    const { createAccount, signedInAgent } = await import('./support/test-app');
+    const { databaseChecksum } = await import('./support/db-checksum');
+    const ctx = createTestContext();
+    await createAccount(ctx, 'clinician', 'wren@clinic.example');
+    const clinician = await signedInAgent(ctx, 'wren@clinic.example');
+    const invite = { role: 'teacher', name: 'Ruth Calder', email: 'ruth@school.example' };
+    const before = databaseChecksum(ctx.db);
+    const forged = await clinician.post('/api/invitations').set('origin', 'https://elsewhere.example').send(invite);
+    expect(forged.status).toBe(403);
+    expect(forged.body.error.code).toBe('cross_site');
+    const fetchMeta = await clinician.post('/api/invitations').set('sec-fetch-site', 'cross-site').send(invite);
+    expect(fetchMeta.status).toBe(403);
+    expect(databaseChecksum(ctx.db)).toBe(before);
+    const own = await clinician.post('/api/invitations').set('origin', 'http://ritorno.test').set('sec-fetch-site', 'same-origin').send(invite);
+    expect(own.status).toBe(201);
+  });
+});
