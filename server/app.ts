@@ -1,12 +1,14 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { toNodeHandler } from 'better-auth/node';
+import compression from 'compression';
 import express from 'express';
 import helmet from 'helmet';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { trustedOrigins } from './lib/origins';
 import { sameOriginWrites } from './middleware/same-origin';
 import { signInLimit } from './middleware/sign-in-limit';
+import { webExport } from './middleware/web-export';
 import { adminRoutes } from './routes/admin.routes';
 import { calendarRoutes } from './routes/calendar.routes';
 import { checkInRoutes } from './routes/check-ins.routes';
@@ -40,6 +42,10 @@ export function createApp(deps: AppDeps): express.Express {
       },
     }),
   );
+  // Phones on weak connections: the script is about a quarter of its size gzipped, JSON far less.
+  // Content is negotiated per request (Accept-Encoding), so calendar apps that send none still get plain
+  // text; small bodies (under 1 KB) go uncompressed.
+  app.use(compression());
 
   // better-auth reads the raw body, so it is mounted before express.json().
   app.post('/api/auth/sign-in/email', signInLimit(deps.env.SIGN_IN_LIMIT_PER_MINUTE ?? 10));
@@ -67,12 +73,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api', apiNotFound);
 
   if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) {
-    const webDir = path.resolve(deps.webDir);
-    app.use(express.static(webDir, { index: false, maxAge: '1h' }));
-    // The web export is a single-page app: every other path gets index.html and the router takes over.
-    app.get('/{*splat}', (_req, res) => {
-      res.sendFile(path.join(webDir, 'index.html'));
-    });
+    app.use(webExport(deps.webDir));
   }
 
   app.use(errorHandler);
