@@ -71,3 +71,25 @@ describe('sign-in attempts', () => {
     expect(limited.body.error.code).toBe('too_many_attempts');
   });
 });
+
+describe('sessions', () => {
+  it('ends every session of an account when it signs out everywhere', async () => {
+    const ctx = createTestContext();
+    await createAccount(ctx, 'musician', 'pia@students.example');
+    const phone = await signedInAgent(ctx, 'pia@students.example');
+    const laptop = await signedInAgent(ctx, 'pia@students.example');
+    expect((await laptop.get('/api/me')).status).toBe(200);
+    await phone.post('/api/auth/revoke-sessions').set('origin', 'http://ritorno.test').send({}).expect(200);
+    expect((await laptop.get('/api/me')).status).toBe(401);
+    expect((await phone.get('/api/me')).status).toBe(401);
+  });
+
+  it('expires a session after its lifetime', async () => {
+    const ctx = createTestContext();
+    await createAccount(ctx, 'musician', 'pia@students.example');
+    const agent = await signedInAgent(ctx, 'pia@students.example');
+    const { session } = await import('@/server/db/schema');
+    ctx.db.update(session).set({ expiresAt: new Date(Date.now() - 1000) }).run();
+    expect((await agent.get('/api/me')).status).toBe(401);
+  });
+});
