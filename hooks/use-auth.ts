@@ -39,11 +39,13 @@ export function useSignUpMutation() {
   });
 }
 
-export function useSignOutMutation() {
+/** Signs out here, or everywhere: every session of the account ends (a lost phone, a shared computer). */
+export function useSignOutMutation(everywhere = false) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async () => {
-      unwrap(await authClient.signOut(), 'We could not sign you out.');
+      if (everywhere) unwrap(await authClient.revokeSessions(), 'We could not sign you out everywhere.');
+      else unwrap(await authClient.signOut(), 'We could not sign you out.');
     },
     // Nothing from the previous account may stay in memory for the next one.
     onSuccess: () => queryClient.clear(),

@@ -47,6 +47,7 @@ export function SideNav({ me, items }: SideNavProps) {
           {`${roleLabel[me.role]} · ${me.email}`}
         </AppText>
         <SignOutButton />
+        <SignOutButton everywhere />
       </View>
     </View>
   );
