@@ -1,25 +1,18 @@
 import { z } from 'zod';
 import { LocalDateSchema } from './local-date';
+import { StageLevelSchema } from './plan';
 import { PlanOverviewSchema } from './plan-overview';
 import { DemandSchema, TierSchema } from './piece';
 import { SetupReminderSchema } from './today';
 
 /** One stage on the calendar: as played ("actual") or as now expected ("projected"). */
-export const MyPlanStageSchema = z.object({
+export const MyPlanStageSchema = StageLevelSchema.extend({
   stageNumber: z.number().int(),
   startDate: LocalDateSchema,
   endDate: LocalDateSchema,
   kind: z.enum(['actual', 'projected']),
   /** The period the musician is in today. */
   current: z.boolean(),
-  minutesPerDay: z.number(),
-  sessionsPerDay: z.number().int(),
-  blockMinutes: z.number(),
-  restMinutes: z.number(),
-  highestTier: TierSchema.nullable(),
-  passagesCleared: z.boolean(),
-  /** "published": a level copied from a published table; "rule": Ritorno's own progression rule. */
-  basis: z.enum(['published', 'rule']),
 });
 export type MyPlanStage = z.infer<typeof MyPlanStageSchema>;
 

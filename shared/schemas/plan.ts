@@ -29,17 +29,22 @@ export const PlanSettingsBodySchema = z.object({ settings: PlanSettingsSchema })
 export type PlanSettingsBody = z.infer<typeof PlanSettingsBodySchema>;
 export type PlanSettingsBodyInput = z.input<typeof PlanSettingsBodySchema>;
 
-/** One stage of the plan as built: a level of the ladder placed on the calendar. */
-export const StageSchema = z.object({
-  index: z.number().int(),
-  number: z.number().int(),
+/** What a stage allows: the same fields wherever a stage is shown. */
+export const StageLevelSchema = z.object({
   minutesPerDay: z.number(),
   sessionsPerDay: z.number().int(),
   blockMinutes: z.number(),
   restMinutes: z.number(),
   highestTier: TierSchema.nullable(),
   passagesCleared: z.boolean(),
+  /** "published": a level copied from a published table; "rule": Ritorno's own progression rule. */
   basis: z.enum(['published', 'rule']),
+});
+
+/** One stage of the plan as built: a level of the ladder placed on the calendar. */
+export const StageSchema = StageLevelSchema.extend({
+  index: z.number().int(),
+  number: z.number().int(),
   source: z.string(),
   startDate: LocalDateSchema,
   endDate: LocalDateSchema,
