@@ -1,17 +1,8 @@
 // The clinician's screens against the seeded demo: a plan that cannot reach its event, fixed and
 // activated (the musician is e-mailed), and a record built from real check-ins. These run after the
 // other scenarios; each run only adds a new plan version, so the phone and wide runs both pass.
-const PASSWORD = 'ritorno-demo-2026';
+import { TIMEOUT, signIn } from './helpers.mjs';
 const CLINICIAN = 'maren.oakley@linden-clinic.example';
-const TIMEOUT = 15_000;
-
-async function signIn(page, baseUrl, email) {
-  await page.goto(`${baseUrl}/sign-in`, { waitUntil: 'networkidle' });
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(PASSWORD);
-  await page.getByTestId('sign-in-submit').click();
-  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: TIMEOUT });
-}
 
 async function openRecord(page, baseUrl, name) {
   await signIn(page, baseUrl, CLINICIAN);

@@ -2,17 +2,8 @@
 // up (?speed=), the pain gates, the history; and a gate over the threshold that stops the session, holds
 // or steps back the plan and e-mails the clinician. Each run uses its own demo musician: a failed gate
 // changes that musician's plan for every later scenario on the same server.
-const PASSWORD = 'ritorno-demo-2026';
-const TIMEOUT = 15_000;
+import { TIMEOUT, signIn } from './helpers.mjs';
 const SPEED = 1200;
-
-async function signIn(page, baseUrl, email) {
-  await page.goto(`${baseUrl}/sign-in`, { waitUntil: 'networkidle' });
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(PASSWORD);
-  await page.getByTestId('sign-in-submit').click();
-  await page.waitForURL((url) => !url.pathname.includes('sign-in'), { timeout: TIMEOUT });
-}
 
 async function visible(locator, timeout = TIMEOUT) {
   await locator.first().waitFor({ state: 'visible', timeout });

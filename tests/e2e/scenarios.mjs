@@ -1,14 +1,5 @@
 // What a new user would try, role by role, against the seeded demo (server/db/demo-scenario.ts).
-const PASSWORD = 'ritorno-demo-2026';
-const TIMEOUT = 15_000;
-
-async function signIn(page, baseUrl, email, password = PASSWORD) {
-  await page.goto(`${baseUrl}/sign-in`, { waitUntil: 'networkidle' });
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(password);
-  await page.getByTestId('sign-in-submit').click();
-  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: TIMEOUT });
-}
+import { TIMEOUT, signIn } from './helpers.mjs';
 
 async function expectScreen(page, testId, { shows = [], hides = [] }) {
   const screen = page.getByTestId(testId);

@@ -1,15 +1,6 @@
 // The teacher's side, tried as a new user would: a student's cleared pieces, and the view shrinking
 // (with a change e-mail) after that student's failed gate. Seeded data: server/db/demo-scenario.ts.
-const PASSWORD = 'ritorno-demo-2026';
-const TIMEOUT = 15_000;
-
-async function signIn(page, baseUrl, email) {
-  await page.goto(`${baseUrl}/sign-in`, { waitUntil: 'networkidle' });
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(PASSWORD);
-  await page.getByTestId('sign-in-submit').click();
-  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: TIMEOUT });
-}
+import { PASSWORD, TIMEOUT, signIn } from './helpers.mjs';
 
 async function visible(locator) {
   await locator.first().waitFor({ state: 'visible', timeout: TIMEOUT });
