@@ -12,7 +12,11 @@ const esmPackages = [
   'kysely',
 ];
 
+// Two cores shared by both projects and the servers some tests start: give each test room.
+const testTimeout = 30_000;
+
 module.exports = {
+  testTimeout,
   projects: [
     {
       displayName: 'node',
