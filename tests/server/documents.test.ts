@@ -53,6 +53,26 @@ describe('documents', () => {
     expect(stored()).toEqual({ rows: 0, files: 0 });
   });
 
+  it('refuses an empty file and stores nothing', async () => {
+    const clinician = await signedInAgent(ctx, fixture.clinicianEmail);
+    const response = await clinician.post(base).field('title', 'Blank').attach('file', Buffer.alloc(0), 'blank.pdf');
+    expect(response.status).toBeGreaterThanOrEqual(400);
+    expect(response.status).toBeLessThan(500);
+    expect(typeof response.body.error.message).toBe('string');
+    expect(stored()).toEqual({ rows: 0, files: 0 });
+  });
+
+  it('keeps a path-traversal file name as a plain name, never as a place on disk', async () => {
+    const clinician = await signedInAgent(ctx, fixture.clinicianEmail);
+    const uploaded = await clinician.post(base).field('title', 'Letter').attach('file', PDF, '../../../etc/passwd.pdf').expect(201);
+    expect(uploaded.body.fileName).not.toContain('/');
+    expect(uploaded.body.fileName).not.toContain('..');
+    const keys = ctx.storage.keys();
+    expect(keys).toHaveLength(1);
+    expect(keys[0]).not.toContain('..');
+    expect(keys[0]).not.toContain('passwd');
+  });
+
   it('refuses an upload without a title or a file, naming the fields', async () => {
     const clinician = await signedInAgent(ctx, fixture.clinicianEmail);
     const response = await clinician.post(base).field('visibility', 'everyone');
