@@ -10,6 +10,7 @@ import type { Env } from './env';
 import { sendInBackground, type Mailer } from './lib/mailer';
 import { passwordResetMail } from './lib/mail-templates';
 import { trustedOrigins } from './lib/origins';
+import { rememberSessionDatabase } from './middleware/session-cache';
 
 const ac = createAccessControl(defaultStatements);
 const noUserAdministration = ac.newRole({ user: [], session: [] });
@@ -26,7 +27,7 @@ export interface AuthDeps {
  * (server/services/invitation.service.ts), admins only from the server side.
  */
 export function createAuth({ db, env, mailer }: AuthDeps) {
-  return betterAuth({
+  const auth = betterAuth({
     appName: 'Ritorno',
     baseURL: env.PUBLIC_URL,
     basePath: '/api/auth',
@@ -59,6 +60,8 @@ export function createAuth({ db, env, mailer }: AuthDeps) {
       bearer(),
     ],
   });
+  rememberSessionDatabase(auth, db);
+  return auth;
 }
 
 export type Auth = ReturnType<typeof createAuth>;

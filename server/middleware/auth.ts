@@ -1,8 +1,8 @@
 import type { RequestHandler } from 'express';
-import { fromNodeHeaders } from 'better-auth/node';
 import { RoleSchema, type Me, type Role } from '../../shared/schemas/role';
 import type { Auth } from '../auth';
 import { HttpError } from '../lib/http-error';
+import { readSession } from './session-cache';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -16,7 +16,7 @@ declare global {
 /** Loads the session from cookie or bearer token; 401 without one. */
 export function requireSession(auth: Auth): RequestHandler {
   return async (req, res, next) => {
-    const session = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
+    const session = await readSession(auth, req.headers);
     if (!session) throw new HttpError(401, 'unauthenticated', 'Sign in to continue.');
     const role = RoleSchema.safeParse(session.user.role);
     if (!role.success) throw new HttpError(403, 'forbidden', 'This account has no role yet.');

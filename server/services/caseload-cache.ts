@@ -11,15 +11,18 @@ import type { Db } from '../db/client';
  * write through any path, present or future, is seen at once without anyone remembering to invalidate.
  * Check-ins and overrides are only ever inserted (or cascade-deleted with the musician): their count,
  * highest rowid and latest date identify them; plans and pieces can change in place and are compared whole.
+ * Today's programme (today.service.ts) depends on the same rows, so it is kept the same way in a cache of its own.
  */
 export type CachedPart = Pick<CaseloadEntry, 'plan' | 'status' | 'lastCheckInDate' | 'alerts'>;
 
-interface Held {
+interface Held<T> {
   fingerprint: string;
   timeZone: string | null;
   date: string | null;
-  part: CachedPart;
+  part: T;
 }
+
+export type Compute<T> = () => { part: T; timeZone: string | null };
 
 const FINGERPRINT = `
   select m.id as id,
@@ -37,7 +40,6 @@ type Row = { id: string; checkIns: string; overrides: string; plan: string | nul
 const MAX_ENTRIES = 20_000;
 
 const statements = new WeakMap<Db, { byClinician: Statement<[string], Row>; byMusician: Statement<[string], Row> }>();
-const held = new WeakMap<Db, Map<string, Held>>();
 
 function statementsFor(db: Db) {
   let found = statements.get(db);
@@ -58,30 +60,33 @@ export function fingerprints(db: Db, scope: { clinicianId: string } | { musician
   return new Map(rows.map((row) => [row.id, JSON.stringify([row.checkIns, row.overrides, row.plan, row.pieces])]));
 }
 
-/** The engine's part of a caseload row, from the cache when nothing it depends on has changed. */
-export function cachedPart(
-  db: Db,
-  musicianId: string,
-  fingerprint: string | undefined,
-  now: Date,
-  compute: () => { part: CachedPart; timeZone: string | null },
-): CachedPart {
-  let entries = held.get(db);
-  if (!entries) {
-    entries = new Map();
-    held.set(db, entries);
-  }
-  const hit = entries.get(musicianId);
-  if (fingerprint !== undefined && hit && hit.fingerprint === fingerprint && hit.date === (hit.timeZone ? localDateOf(now, hit.timeZone) : null)) {
-    return hit.part;
-  }
-  const { part, timeZone } = compute();
-  if (fingerprint === undefined) return part;
-  entries.delete(musicianId);
-  entries.set(musicianId, { fingerprint, timeZone, date: timeZone ? localDateOf(now, timeZone) : null, part });
-  if (entries.size > MAX_ENTRIES) {
-    const oldest = entries.keys().next().value;
-    if (oldest !== undefined) entries.delete(oldest);
-  }
-  return part;
+/**
+ * A per-musician cache of one engine result: `compute` runs only when the fingerprint or the plan's local
+ * date has changed. Without a fingerprint (the musician has no row) nothing is kept.
+ */
+export function musicianCache<T>() {
+  const held = new WeakMap<Db, Map<string, Held<T>>>();
+  return (db: Db, musicianId: string, fingerprint: string | undefined, now: Date, compute: Compute<T>): T => {
+    let entries = held.get(db);
+    if (!entries) {
+      entries = new Map();
+      held.set(db, entries);
+    }
+    const hit = entries.get(musicianId);
+    if (fingerprint !== undefined && hit && hit.fingerprint === fingerprint && hit.date === (hit.timeZone ? localDateOf(now, hit.timeZone) : null)) {
+      return hit.part;
+    }
+    const { part, timeZone } = compute();
+    if (fingerprint === undefined) return part;
+    entries.delete(musicianId);
+    entries.set(musicianId, { fingerprint, timeZone, date: timeZone ? localDateOf(now, timeZone) : null, part });
+    if (entries.size > MAX_ENTRIES) {
+      const oldest = entries.keys().next().value;
+      if (oldest !== undefined) entries.delete(oldest);
+    }
+    return part;
+  };
 }
+
+/** The engine's part of a caseload row, from the cache when nothing it depends on has changed. */
+export const cachedPart = musicianCache<CachedPart>();

@@ -6,7 +6,7 @@ import { clearanceAt, type PieceClearance } from './clearance';
 import { daysBetween } from './dates';
 import type { ProgressionStatus } from './history';
 import { loadReport, type LoadWarning } from './load';
-import { progressionState } from './progression';
+import { progressionState, type ProgressionState } from './progression';
 
 export type PlanSummaryInput = {
   settings: PlanSettings;
@@ -44,8 +44,8 @@ export type PlanSummary = {
   prompts: string[];
 };
 
-export function planSummary(input: PlanSummaryInput): PlanSummary {
-  const state = progressionState(input);
+/** `state` may be passed when the caller already ran the engine on the same input (the replay is the cost). */
+export function planSummary(input: PlanSummaryInput, state: ProgressionState = progressionState(input)): PlanSummary {
   const { settings } = input;
   const { stage } = state;
   const next = state.periods.find((p) => p.kind === 'projected' && p.startDate > state.today);
