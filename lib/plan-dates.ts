@@ -1,4 +1,4 @@
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { daysBetween } from '@/shared/scheduler/dates';
 
 /** A plan date (YYYY-MM-DD) as "12 Mar 2027", read without any time zone shift. */

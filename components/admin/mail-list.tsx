@@ -1,7 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import Ionicons from '@expo/vector-icons/Ionicons';
 import { Link } from 'expo-router';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { radii, spacing, touchTarget } from '@/constants/theme';
 import { isMailboxOff, useDevMailQuery } from '@/hooks/use-dev-mail';
 import { useTheme } from '@/hooks/use-theme';

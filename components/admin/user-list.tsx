@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { spacing } from '@/constants/theme';
 import { useAdminUsersQuery } from '@/hooks/use-admin-users';
 import { useBreakpoints } from '@/hooks/use-breakpoints';

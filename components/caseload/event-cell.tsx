@@ -1,5 +1,6 @@
 import { View } from 'react-native';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import type { CaseloadEntry } from '@/shared/schemas/musician';
 import { AppText } from '@/components/ui/text';
 

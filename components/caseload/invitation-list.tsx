@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { radii, spacing } from '@/constants/theme';
 import { useSentInvitationsQuery } from '@/hooks/use-invitations';
 import { useTheme } from '@/hooks/use-theme';

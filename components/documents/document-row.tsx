@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { spacing } from '@/constants/theme';
 import { documentsPath, useDeleteDocumentMutation, useUpdateDocumentMutation } from '@/hooks/use-documents';
 import { openServerPath } from '@/lib/open-url';

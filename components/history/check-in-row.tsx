@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import Ionicons from '@expo/vector-icons/Ionicons';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { gateWhere, redFlagWords } from '@/shared/scheduler';

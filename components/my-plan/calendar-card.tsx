@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { radii, spacing } from '@/constants/theme';
 import { CALENDAR_DOWNLOAD_PATH, useCalendarFeedQuery, useCreateCalendarFeedMutation } from '@/hooks/use-calendar-feed';
 import { useTheme } from '@/hooks/use-theme';

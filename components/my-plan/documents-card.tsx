@@ -1,5 +1,6 @@
 import { Linking, Platform, StyleSheet, View } from 'react-native';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
 import { myDocumentHref, useMyDocumentsQuery } from '@/hooks/use-my-documents';
 import { apiBaseUrl } from '@/lib/api-client';

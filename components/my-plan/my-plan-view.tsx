@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import { useMyPlanQuery } from '@/hooks/use-my-plan';

@@ -1,4 +1,5 @@
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import type { MyPlan } from '@/shared/schemas/my-plan';
 import { Card } from '@/components/ui/card';
 import { AppText } from '@/components/ui/text';

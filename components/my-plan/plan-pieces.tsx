@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
 import type { MyPiece } from '@/shared/schemas/my-plan';
 import { Card } from '@/components/ui/card';

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { radii, spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { MyPlanStage } from '@/shared/schemas/my-plan';

@@ -1,4 +1,5 @@
-import { format, addWeeks } from 'date-fns';
+import { format } from 'date-fns/format';
+import { addWeeks } from 'date-fns/addWeeks';
 import { useMusicianQuery } from '@/hooks/use-musicians';
 import { usePiecesQuery } from '@/hooks/use-pieces';
 import { usePlanStateQuery, usePlanVersionQuery } from '@/hooks/use-plans';

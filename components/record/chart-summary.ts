@@ -1,4 +1,5 @@
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import type { PlayingChart } from '@/shared/schemas/chart';
 
 const day = (date: string) => format(parseISO(date), 'd MMM');

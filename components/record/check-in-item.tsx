@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
 import type { CheckInRow } from '@/shared/schemas/record';
 import { Card } from '@/components/ui/card';

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { radii, spacing } from '@/constants/theme';
 import { useAddNoteMutation, useNotesQuery } from '@/hooks/use-record';
 import { useTheme } from '@/hooks/use-theme';

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { radii, spacing } from '@/constants/theme';
 import { usePlanVersionsQuery } from '@/hooks/use-plans';
 import { useTheme } from '@/hooks/use-theme';

@@ -1,4 +1,5 @@
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { PieceClearance } from '@/shared/schemas/repertoire';
 

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 import { radii, spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { Share } from '@/shared/schemas/share';

@@ -1,4 +1,5 @@
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns/format';
+import { parseISO } from 'date-fns/parseISO';
 import type { Today } from '@/shared/schemas/today';
 import { Banner } from '@/components/ui/banner';
 import { AppText } from '@/components/ui/text';

@@ -1,5 +1,5 @@
 import { TZDate, tzOffset } from '@date-fns/tz';
-import { format } from 'date-fns';
+import { format } from 'date-fns/format';
 
 /**
  * Plan dates are `YYYY-MM-DD` strings in the plan's own time zone. Arithmetic runs on whole day
