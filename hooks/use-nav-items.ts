@@ -4,7 +4,7 @@ import type { Role } from '@/shared/schemas/role';
 import { isMailboxOff, useDevMailQuery } from './use-dev-mail';
 
 export interface NavItem {
-  href: '/caseload' | '/home' | '/plan' | '/history' | '/students' | '/users' | '/mailbox' | '/sharing';
+  href: '/caseload' | '/home' | '/plan' | '/history' | '/students' | '/users' | '/audit' | '/mailbox' | '/sharing';
   label: string;
   icon: ComponentProps<typeof Ionicons>['name'];
   testID: string;
@@ -21,6 +21,7 @@ const byRole: Record<Role, NavItem[]> = {
   teacher: [{ href: '/students', label: 'Students', icon: 'school-outline', testID: 'nav-students' }],
   admin: [
     { href: '/users', label: 'Accounts', icon: 'person-circle-outline', testID: 'nav-users' },
+    { href: '/audit', label: 'Audit trail', icon: 'document-text-outline', testID: 'nav-audit' },
     { href: '/mailbox', label: 'Mailbox', icon: 'mail-outline', testID: 'nav-mail' },
   ],
 };

@@ -10,6 +10,7 @@ export const RECORD_TABS = [
   { value: 'repertoire', label: 'Repertoire' },
   { value: 'setup', label: 'Setup' },
   { value: 'documents', label: 'Documents' },
+  { value: 'activity', label: 'Activity' },
 ] as const;
 
 export type RecordTab = (typeof RECORD_TABS)[number]['value'];

@@ -16,6 +16,7 @@ import { PlanTab } from './plan-tab';
 import { ProfileTab } from './profile-tab';
 import { ProgressTab } from './progress-tab';
 import { RecordTabs, type RecordTab } from './record-tabs';
+import { ActivityTab } from './activity-tab';
 
 /** One musician's record for their clinician, in tabs (phone and wide alike; wide tabs use two panes). */
 export function RecordView({ id, initialTab }: { id: string; initialTab: RecordTab }) {
@@ -44,6 +45,7 @@ export function RecordView({ id, initialTab }: { id: string; initialTab: RecordT
       {tab === 'repertoire' ? <RepertoireTab id={id} /> : null}
       {tab === 'setup' ? <SetupTab id={id} /> : null}
       {tab === 'documents' ? <DocumentsTab id={id} /> : null}
+      {tab === 'activity' ? <ActivityTab id={id} /> : null}
     </Screen>
   );
 }
