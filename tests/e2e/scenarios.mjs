@@ -51,6 +51,8 @@ export const scenarios = [
     run: async ({ page, baseUrl }) => {
       await signIn(page, baseUrl, 'admin@ritorno.example');
       await expectScreen(page, 'screen-admin-users', { shows: ['Tomas Reyne', 'Dario Lenz', 'Noor Haddad'] });
+      await page.getByTestId('nav-audit').click();
+      await expectScreen(page, 'screen-audit', {});
     },
   },
   {
