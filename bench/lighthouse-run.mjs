@@ -1,5 +1,7 @@
 // Runs Lighthouse in plain Node: under tsx, esbuild's name helper leaks into the functions Lighthouse
 // sends to the page (`__name is not defined`). Usage: node lighthouse-run.mjs <url> [cookie]; prints scores.
+// With LIGHTHOUSE_REPORT set, the full report goes there too: the scores alone do not say what to fix.
+import fs from 'node:fs';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
 
@@ -17,6 +19,7 @@ try {
     ...(cookie ? { extraHeaders: { Cookie: cookie } } : {}),
   });
   const lhr = result?.lhr;
+  if (process.env.LIGHTHOUSE_REPORT && lhr) fs.writeFileSync(process.env.LIGHTHOUSE_REPORT, JSON.stringify(lhr, null, 1));
   const failing = Object.values(lhr?.audits ?? {})
     .filter((audit) => audit.score !== null && audit.score < 0.9 && audit.scoreDisplayMode !== 'informative' && audit.scoreDisplayMode !== 'notApplicable')
     .map((audit) => audit.id);

@@ -3,6 +3,7 @@ import path from 'node:path';
 import { BENCH_PASSWORD, musicianEmail } from './clinic-db';
 import { verdict, type Bench, type Row } from './harness';
 import { signIn } from './server-control';
+import { WORK } from './web.bench';
 
 interface Scores { performance: number; accessibility: number; finalUrl: string; failing: string[] }
 
@@ -17,9 +18,11 @@ export const lighthouseBench: Bench = {
       ['sign-in', `${server.url}/sign-in`, []],
       ['today (signed in)', `${server.url}/home`, [cookie]],
     ] as const) {
-      const out = execFileSync(process.execPath, [path.join(__dirname, 'lighthouse-run.mjs'), url, ...args], { encoding: 'utf8', timeout: 180_000 });
+      const report = path.join(WORK, `lighthouse-${screen.split(' ')[0]}.json`);
+      const env = { ...process.env, LIGHTHOUSE_REPORT: report };
+      const out = execFileSync(process.execPath, [path.join(__dirname, 'lighthouse-run.mjs'), url, ...args], { encoding: 'utf8', timeout: 180_000, env });
       const scores = JSON.parse(out.trim().split('\n').at(-1) ?? '{}') as Scores;
-      console.error(`lighthouse ${screen}: ${scores.finalUrl}; below 0.9: ${scores.failing.join(', ')}`);
+      console.error(`lighthouse ${screen}: ${scores.finalUrl}; below 0.9: ${scores.failing.join(', ')}; report in ${report}`);
       rows.push({ area: 'web', measure: `Lighthouse mobile, ${screen}: performance / accessibility`, ours: `${scores.performance} / ${scores.accessibility}`, baseline: '', ratio: '', budget: '>= 90 each', verdict: verdict(scores.performance >= 90 && scores.accessibility >= 90) });
     }
     return rows;
