@@ -49,19 +49,24 @@ export const SessionCheckInSchema = z.object({
 });
 export type SessionCheckIn = z.infer<typeof SessionCheckInSchema>;
 
+/** What a pain answer outside the gates carries: when, how much, and any red flag. */
+const painAnswer = {
+  id: z.string().optional(),
+  date: LocalDateSchema,
+  pain: PainScoreSchema,
+  redFlags: z.array(RedFlagSchema).default([]),
+  note: z.string().max(2000).optional(),
+  recordedAt: z.string().optional(),
+};
+
 /**
  * The next-morning check about the previous day's playing: symptoms may come later or the next day
  * (BAPAM, "Returning to Playing and Performance for Instrumental Musicians").
  */
 export const NextMorningCheckInSchema = z.object({
   kind: z.literal('next_morning'),
-  id: z.string().optional(),
   /** The morning's date; it reports on the day before. */
-  date: LocalDateSchema,
-  pain: PainScoreSchema,
-  redFlags: z.array(RedFlagSchema).default([]),
-  note: z.string().max(2000).optional(),
-  recordedAt: z.string().optional(),
+  ...painAnswer,
 });
 export type NextMorningCheckIn = z.infer<typeof NextMorningCheckInSchema>;
 
@@ -71,12 +76,7 @@ export type NextMorningCheckIn = z.infer<typeof NextMorningCheckInSchema>;
  */
 export const PainReportSchema = z.object({
   kind: z.literal('pain_report'),
-  id: z.string().optional(),
-  date: LocalDateSchema,
-  pain: PainScoreSchema,
-  redFlags: z.array(RedFlagSchema).default([]),
-  note: z.string().max(2000).optional(),
-  recordedAt: z.string().optional(),
+  ...painAnswer,
 });
 export type PainReport = z.infer<typeof PainReportSchema>;
 
