@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
-import { progressionState, type ProgressionState } from '../../shared/scheduler';
+import { planSummary, progressionState, type PlanSummary, type ProgressionState } from '../../shared/scheduler';
+import type { PlanOverview } from '../../shared/schemas/plan-overview';
 import type { CheckIn } from '../../shared/schemas/check-in';
 import type { Db } from '../db/client';
 import { checkIns } from '../db/schema';
@@ -9,7 +10,8 @@ import type { Mailer } from '../lib/mailer';
 import type { CheckInResult, CheckInUpload } from '../../shared/schemas/today';
 import { alertClinician } from './alert.service';
 import { syncClearanceNotices } from './clearance-notice.service';
-import { loadActivePlan, planOverview } from './plan.service';
+import { loadActivePlan } from './plan.service';
+import { toOverview } from './plan-overview';
 
 export interface RecordedCheckIn {
   id: string;
@@ -18,6 +20,9 @@ export interface RecordedCheckIn {
   before: ProgressionState;
   after: ProgressionState;
   painThreshold: { session: number; nextMorning: number };
+  /** The plan after this check-in, summarised from `after` (no second replay). */
+  overview: PlanOverview;
+  summary: PlanSummary;
 }
 
 /** Pain over the plan's threshold in any gate, or on the next morning. */
@@ -41,7 +46,13 @@ export function recordCheckIn(db: Db, musicianId: string, clientKey: string, che
     .where(and(eq(checkIns.musicianId, musicianId), eq(checkIns.clientKey, clientKey)))
     .get();
   const painThreshold = loaded.settings.painThreshold;
-  if (existing) return { id: existing.id, duplicate: true, checkIn: existing.payload, before, after: before, painThreshold };
+  const summarise = (all: CheckIn[], state: ProgressionState) => {
+    const summary = planSummary({ ...loaded, checkIns: all, today: now }, state);
+    return { summary, overview: toOverview(loaded.plan, summary) };
+  };
+  if (existing) {
+    return { id: existing.id, duplicate: true, checkIn: existing.payload, before, after: before, painThreshold, ...summarise(loaded.checkIns, before) };
+  }
 
   if (checkIn.date > before.today) {
     throw new HttpError(422, 'future_date', `A check-in cannot be dated after today (${before.today}).`);
@@ -54,8 +65,9 @@ export function recordCheckIn(db: Db, musicianId: string, clientKey: string, che
   db.insert(checkIns)
     .values({ id, musicianId, date: checkIn.date, kind: checkIn.kind, payload: stored, clientKey, recordedAt: now })
     .run();
-  const after = progressionState({ ...loaded, checkIns: [...loaded.checkIns, stored], today: now });
-  return { id, duplicate: false, checkIn: stored, before, after, painThreshold };
+  const all = [...loaded.checkIns, stored];
+  const after = progressionState({ ...loaded, checkIns: all, today: now });
+  return { id, duplicate: false, checkIn: stored, before, after, painThreshold, ...summarise(all, after) };
 }
 
 /**
@@ -82,12 +94,11 @@ export async function submitCheckIn(
     console.error('[mail] clinician alert not sent:', error);
   }
   try {
-    await syncClearanceNotices(deps, musicianId, now);
+    await syncClearanceNotices(deps, musicianId, now, recorded.summary);
   } catch (error) {
     console.error('[mail] clearance notice not sent:', error);
   }
-  const overview = planOverview(db, musicianId, now);
-  if (!overview) throw notFound('Active plan');
+  const { overview } = recorded;
   return {
     id: recorded.id,
     duplicate: recorded.duplicate,

@@ -1,6 +1,6 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { and, desc, eq, like } from 'drizzle-orm';
-import { clearanceFingerprint } from '../../shared/scheduler';
+import { clearanceFingerprint, teacherClearance, type PlanSummary } from '../../shared/scheduler';
 import type { Db } from '../db/client';
 import { clearanceShares, musicians, notifications, user } from '../db/schema';
 import type { Mailer } from '../lib/mailer';
@@ -14,7 +14,13 @@ const KIND = 'clearance';
  * in non-medical words. The last fingerprint sent is kept in the notifications table; the first look
  * only records a baseline. Returns how many teachers were e-mailed.
  */
-export async function syncClearanceNotices(deps: { db: Db; mailer: Mailer; publicUrl: string }, musicianId: string, now: Date): Promise<number> {
+export async function syncClearanceNotices(
+  deps: { db: Db; mailer: Mailer; publicUrl: string },
+  musicianId: string,
+  now: Date,
+  /** The plan's summary when the caller has just computed it (saves a replay of the history). */
+  summary?: PlanSummary,
+): Promise<number> {
   const { db } = deps;
   const musician = db.select().from(musicians).where(eq(musicians.id, musicianId)).get();
   if (!musician) return 0;
@@ -25,7 +31,9 @@ export async function syncClearanceNotices(deps: { db: Db; mailer: Mailer; publi
     .where(eq(clearanceShares.musicianId, musicianId))
     .all();
   if (teachers.length === 0) return 0;
-  const view = clearanceOf(db, musician, now);
+  // Only what a teacher may see goes into the view: never the whole musician row.
+  const student = { id: musician.id, name: musician.name, instrument: musician.instrument };
+  const view = summary ? teacherClearance(student, summary) : clearanceOf(db, student, now);
   const fingerprint = createHash('sha256').update(clearanceFingerprint(view)).digest('hex').slice(0, 16);
   const last = db
     .select({ dedupeKey: notifications.dedupeKey })

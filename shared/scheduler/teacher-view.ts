@@ -34,7 +34,10 @@ export function teacherClearance(
   }));
   const programme = pieces.filter((piece) => piece.onProgramme);
   return {
-    ...student,
+    // Named one by one, so a caller passing a whole record cannot leak more than these into the view.
+    id: student.id,
+    name: student.name,
+    instrument: student.instrument,
     asOf: summary.today,
     readiness: readinessOf(summary),
     event: summary.event,
