@@ -34,7 +34,30 @@ const ACTIONS: Record<string, string> = {
   'share.invitation_withdrawn': 'Withdrew a teacher invitation',
 };
 
-const what = (entry: AuditEntry) => ACTIONS[entry.action] ?? entry.action;
+// Which part of the record a read was of: the segment after /api/musicians/:id.
+const PARTS: Record<string, string> = {
+  profile: 'the profile',
+  notes: 'the notes',
+  'check-ins': 'the check-ins',
+  chart: 'the chart',
+  load: 'the load',
+  plan: 'the plan',
+  plans: 'the plan versions',
+  pieces: 'the repertoire',
+  setup: 'the setup',
+  documents: 'the documents',
+  shares: 'who it is shared with',
+  audit: 'this activity',
+};
+
+function what(entry: AuditEntry): string {
+  const path = entry.detail.path;
+  if (entry.action === 'record.read' && typeof path === 'string') {
+    const part = path.split('/')[4];
+    return part ? `Read ${PARTS[part] ?? part}` : 'Read the record';
+  }
+  return ACTIONS[entry.action] ?? entry.action;
+}
 const when = (entry: AuditEntry) => format(new Date(entry.at), 'd MMM yyyy, HH:mm');
 
 const columns: TableColumn<AuditEntry>[] = [

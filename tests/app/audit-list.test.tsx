@@ -22,15 +22,21 @@ describe('ActivityTab', () => {
     const calls = mockApi({
       'GET /api/musicians/m-1/audit': {
         status: 200,
-        body: [entry('override.hold', '2027-03-02T10:15:00.000Z'), entry('record.read', '2027-03-01T09:00:00.000Z'), entry('something.new', '2027-02-28T08:00:00.000Z')],
+        body: [
+          entry('override.hold', '2027-03-02T10:15:00.000Z'),
+          entry('record.read', '2027-03-01T09:00:00.000Z'),
+          { ...entry('record.read', '2027-03-01T09:01:00.000Z'), detail: { path: '/api/musicians/m-1/notes' } },
+          entry('something.new', '2027-02-28T08:00:00.000Z'),
+        ],
       },
     });
     renderScreen(<ActivityTab id="m-1" />);
     expect(await screen.findByText('Held the plan')).toBeTruthy();
     expect(screen.getByText('Read the record')).toBeTruthy();
+    expect(screen.getByText('Read the notes')).toBeTruthy();
     // An action without words of ours is shown as recorded rather than hidden.
     expect(screen.getByText('something.new')).toBeTruthy();
-    expect(screen.getAllByTestId('audit-row')).toHaveLength(3);
+    expect(screen.getAllByTestId('audit-row')).toHaveLength(4);
     expect(calls.map((call) => `${call.method} ${call.path}`)).toContain('GET /api/musicians/m-1/audit');
   });
 
