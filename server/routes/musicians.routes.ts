@@ -3,6 +3,7 @@ import { CaseloadQuerySchema } from '../../shared/schemas/musician';
 import { currentUser, requireRole, requireSession } from '../middleware/auth';
 import { auditRecordReads } from '../middleware/audit-reads';
 import { musicianTrail } from '../services/audit-trail.service';
+import { ownMusician } from '../services/own-musician';
 import { getCaseloadEntry, listCaseload } from '../services/caseload.service';
 import type { AppDeps } from './deps';
 import { documentRoutes } from './documents.routes';
@@ -32,7 +33,7 @@ export function musicianRoutes(deps: AppDeps): Router {
 
   router.get('/:id/audit', (req, res) => {
     const { id } = paramsOf(req, 'id');
-    getCaseloadEntry(db, currentUser(res.locals).id, id, now());
+    ownMusician(db, currentUser(res.locals).id, id);
     res.json(musicianTrail(db, id));
   });
 

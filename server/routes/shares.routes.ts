@@ -7,7 +7,8 @@ import { currentUser, requireRole, requireSession } from '../middleware/auth';
 import { validateBody } from '../middleware/validate';
 import { audit } from '../services/audit';
 import { syncClearanceNotices } from '../services/clearance-notice.service';
-import { getMusicianByUser, getOwnMusician } from '../services/musician.service';
+import { getMusicianByUser } from '../services/musician.service';
+import { ownMusician } from '../services/own-musician';
 import { listShares, shareWithTeacher, stopSharing, withdrawInvitation } from '../services/share.service';
 import type { AppDeps } from './deps';
 
@@ -70,7 +71,7 @@ export function musicianShareRoutes({ auth, db, now }: AppDeps): Router {
   router.use(requireSession(auth), requireRole('clinician'));
   router.get('/', (req, res) => {
     const { musicianId } = z.object({ musicianId: z.string().min(1).max(100) }).parse(req.params);
-    const musician = getOwnMusician(db, currentUser(res.locals).id, musicianId, now());
+    const musician = ownMusician(db, currentUser(res.locals).id, musicianId);
     res.json(listShares(db, musician.id, now()));
   });
   return router;

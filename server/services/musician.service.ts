@@ -1,14 +1,7 @@
 import { eq, sql } from 'drizzle-orm';
-import type { CaseloadEntry } from '../../shared/schemas/musician';
 import type { Db } from '../db/client';
 import { musicians, user } from '../db/schema';
 import { notFound } from '../lib/http-error';
-import { getCaseloadEntry } from './caseload.service';
-
-/** A clinician reaches only their own musicians: anyone else's answers 404, as if it did not exist. */
-export function getOwnMusician(db: Db, clinicianId: string, musicianId: string, now: Date): CaseloadEntry {
-  return getCaseloadEntry(db, clinicianId, musicianId, now);
-}
 
 // Every musician's request starts here: prepared once per database rather than built per request.
 const prepareByUser = (db: Db) =>
