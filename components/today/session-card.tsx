@@ -7,19 +7,21 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { AppText } from '@/components/ui/text';
-import { itemLine } from './step-words';
+import { sessionItemLine } from '@/shared/scheduler/session-words';
 
 export interface SessionCardProps {
   session: DaySession;
   /** Only the first session not yet done may start. */
   canStart: boolean;
   onStart: () => void;
+  /** The plan's stop threshold at the gates, said in the pain checks. */
+  painThreshold: number;
 }
 
 const icons = { gate: 'shield-checkmark-outline', warm_up: 'sunny-outline', play: 'musical-notes-outline', burst: 'flash-outline', rest: 'cafe-outline', cool_down: 'leaf-outline' } as const;
 
 /** One of today's sessions as its blocks, rests and checks, with the way to start it. */
-export function SessionCard({ session, canStart, onStart }: SessionCardProps) {
+export function SessionCard({ session, canStart, onStart, painThreshold }: SessionCardProps) {
   const { colors } = useTheme();
   const label = `Session ${session.index + 1}`;
   return (
@@ -34,7 +36,7 @@ export function SessionCard({ session, canStart, onStart }: SessionCardProps) {
           <View key={`${item.kind}-${item.startMinute}-${item.gate?.position ?? ''}`} style={styles.item}>
             <Ionicons name={icons[item.kind]} size={18} color={item.kind === 'rest' ? colors.info : colors.accent} />
             <AppText variant={item.kind === 'gate' ? 'caption' : 'body'} tone={item.kind === 'gate' ? 'muted' : 'default'}>
-              {itemLine(item)}
+              {sessionItemLine(item, painThreshold)}
             </AppText>
           </View>
         ))}

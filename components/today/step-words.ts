@@ -1,5 +1,6 @@
 import type { Tier } from '@/shared/schemas/piece';
-import type { ClearedPiece, SessionItem } from '@/shared/schemas/today';
+import type { ClearedPiece } from '@/shared/schemas/today';
+import { tierAllowance as tierWords } from '@/shared/scheduler/session-words';
 import type { SessionStep } from './session-machine';
 
 export const TIER_WORDS: Record<Tier, string> = { easy: 'easy', moderate: 'moderate', demanding: 'demanding' };
@@ -21,12 +22,7 @@ export function stepTitle(step: Timed): string {
   }
 }
 
-/** The tier a block allows, in words ("easy pieces", "exercises only"). */
-export function tierWords(tier: Tier | null | undefined): string {
-  if (!tier) return 'technical exercises only';
-  if (tier === 'easy') return 'easy pieces';
-  return `pieces up to ${TIER_WORDS[tier]}`;
-}
+export { tierAllowance as tierWords } from '@/shared/scheduler/session-words';
 
 /** What to do in a timed step, named from today's cleared repertoire. */
 export function whatToPlay(step: Timed, pieces: ClearedPiece[], maxBurstMinutes: number): string {
@@ -41,23 +37,4 @@ export function whatToPlay(step: Timed, pieces: ClearedPiece[], maxBurstMinutes:
   }
   const titles = pieces.map((piece) => piece.title);
   return titles.length > 0 ? `Play ${tierWords(step.tier)}: ${titles.join(', ')}.` : `Play ${tierWords(step.tier)}.`;
-}
-
-/** One line for a session item in today's overview. */
-export function itemLine(item: SessionItem): string {
-  const min = `${item.minutes} min`;
-  switch (item.kind) {
-    case 'gate':
-      return item.gate?.position === 'before' ? 'Pain check before you start' : item.gate?.position === 'after' ? 'Pain check after playing' : 'Quick pain check';
-    case 'warm_up':
-      return `Warm up, ${min}`;
-    case 'cool_down':
-      return `Cool down, ${min}`;
-    case 'rest':
-      return `Rest, ${min}`;
-    case 'burst':
-      return `Passage burst, ${min}`;
-    default:
-      return `Block ${item.block ?? ''}: ${min} of ${tierWords(item.tier)}`;
-  }
 }

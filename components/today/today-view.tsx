@@ -66,7 +66,7 @@ export function TodayView({ speed = 1 }: { speed?: number }) {
               <View style={[styles.grid, isWide && styles.gridWide]}>
                 <View style={[styles.main, isWide && styles.mainWide]}>
                   {data.sessions.map((session) => (
-                    <SessionCard key={session.index} session={session} canStart={firstOpen?.index === session.index} onStart={() => start(session.index)} />
+                    <SessionCard key={session.index} session={session} canStart={firstOpen?.index === session.index} onStart={() => start(session.index)} painThreshold={data.painThreshold.session} />
                   ))}
                 </View>
                 {data.sessions.length > 0 || data.setup.length > 0 ? (

@@ -15,3 +15,4 @@ export { CheckInSchema, type CheckIn, type CheckInInput, RedFlagSchema, RED_FLAG
 export { OverrideSchema, type Override } from '../schemas/override';
 export * from './teacher-view';
 export * from './rest-days';
+export * from './session-words';

@@ -1,6 +1,6 @@
 import ICAL from 'ical.js';
 import request from 'supertest';
-import { progressionState, sessionsForRange } from '@/shared/scheduler';
+import { progressionState, sessionItemLine, sessionsForRange } from '@/shared/scheduler';
 import { musicianWithPlan } from './support/plan-fixture';
 import { createTestContext, signedInAgent, type TestContext } from './support/test-app';
 
@@ -44,7 +44,9 @@ describe('calendar export and feed', () => {
       // Local wall time is the session's start time on both sides of the clock change.
       expect(local.toString().slice(0, 16)).toBe(`${day.date}T${s.startTime}`);
       expect(new Date(local.toJSDate()).toISOString()).toBe(s.startsAt);
-      expect(vevent?.getFirstPropertyValue('description')).toContain(`Play `);
+      // Each block in the same words as on the Today screen (shared/scheduler/session-words.ts).
+      const firstPlay = s.items.find((item) => item.kind === 'play');
+      if (firstPlay) expect(vevent?.getFirstPropertyValue('description')).toContain(sessionItemLine(firstPlay, fixture.settings.painThreshold.session));
       // RFC 5545 3.6.6: a DISPLAY alarm has ACTION, TRIGGER and DESCRIPTION.
       const alarm = vevent?.getFirstSubcomponent('valarm');
       expect(alarm?.getFirstPropertyValue('action')).toBe('DISPLAY');
