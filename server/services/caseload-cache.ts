@@ -24,17 +24,25 @@ interface Held<T> {
 
 export type Compute<T> = () => { part: T; timeZone: string | null };
 
-const FINGERPRINT = `
-  select m.id as id,
+/**
+ * The fingerprint's columns, for a query over `musicians m`. Values that could run into each other
+ * (a piece's title and composer) are joined as JSON arrays, so no two different rows read the same.
+ */
+export const FINGERPRINT_COLUMNS = `m.id as id,
     (select count(*) || '.' || ifnull(max(c.rowid), 0) || '.' || ifnull(max(c.date), '') from check_ins c where c.musician_id = m.id) as checkIns,
-    (select count(*) || '.' || ifnull(max(o.rowid), 0) || '.' || ifnull(group_concat(u.name, ','), '')
+    (select count(*) || '.' || ifnull(max(o.rowid), 0) || '.' || ifnull(json_group_array(u.name), '')
        from plan_overrides o join user u on u.id = o.by_user_id where o.musician_id = m.id) as overrides,
-    (select p.id || '.' || p.version || '.' || p.settings from plans p where p.musician_id = m.id and p.status = 'active') as plan,
-    (select group_concat(x.id || x.title || x.composer || x.tier || x.passages || x.on_programme, '|')
-       from pieces x where x.musician_id = m.id) as pieces
-  from musicians m`;
+    (select json_array(p.id, p.version, p.settings) from plans p where p.musician_id = m.id and p.status = 'active') as plan,
+    (select json_group_array(json_array(x.id, x.title, x.composer, x.tier, x.passages, x.on_programme))
+       from pieces x where x.musician_id = m.id) as pieces`;
 
-type Row = { id: string; checkIns: string; overrides: string; plan: string | null; pieces: string | null };
+const FINGERPRINT = `select ${FINGERPRINT_COLUMNS} from musicians m`;
+
+export type FingerprintRow = { id: string; checkIns: string; overrides: string; plan: string | null; pieces: string | null };
+type Row = FingerprintRow;
+
+/** One musician's fingerprint from a row of FINGERPRINT_COLUMNS. */
+export const fingerprintOf = (row: FingerprintRow): string => JSON.stringify([row.checkIns, row.overrides, row.plan, row.pieces]);
 
 // A clinic of 10,000 musicians fits; beyond that the oldest entries go first (Map keeps insertion order).
 const MAX_ENTRIES = 20_000;
@@ -57,7 +65,7 @@ function statementsFor(db: Db) {
 export function fingerprints(db: Db, scope: { clinicianId: string } | { musicianId: string }): Map<string, string> {
   const { byClinician, byMusician } = statementsFor(db);
   const rows = 'clinicianId' in scope ? byClinician.all(scope.clinicianId) : byMusician.all(scope.musicianId);
-  return new Map(rows.map((row) => [row.id, JSON.stringify([row.checkIns, row.overrides, row.plan, row.pieces])]));
+  return new Map(rows.map((row) => [row.id, fingerprintOf(row)]));
 }
 
 /**

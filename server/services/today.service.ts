@@ -1,44 +1,88 @@
-import { and, eq, sql } from 'drizzle-orm';
+import { createHash } from 'node:crypto';
+import type { Statement } from 'better-sqlite3';
 import { addDays, planSummary, progressionState, sessionsForDate } from '../../shared/scheduler';
 import type { Today } from '../../shared/schemas/today';
 import type { Db } from '../db/client';
-import { setupItems } from '../db/schema';
+import { dataGeneration } from '../db/data-generation';
 import { notFound } from '../lib/http-error';
-import { fingerprints, musicianCache } from './caseload-cache';
+import { FINGERPRINT_COLUMNS, fingerprintOf, musicianCache, type FingerprintRow } from './caseload-cache';
 import { loadActivePlan } from './plan.service';
 import { toOverview } from './plan-overview';
 
 type Programme = Omit<Today, 'setup'>;
 
-// Replaying every check-in through the engine is most of a request's cost and the musician opens this
-// screen many times a day: the result is kept under the same fingerprint as the caseload rows (their
-// plan, check-ins, overrides and pieces, and the plan's local date), so any write is seen at once.
-const cachedProgramme = musicianCache<Programme>();
-
-// Setup reminders are not part of the fingerprint, so they are read on every request: by a statement
-// prepared once per database, since building the query each time cost more than running it.
-const prepareSetup = (db: Db) =>
-  db
-    .select({ id: setupItems.id, label: setupItems.label, instructions: setupItems.instructions })
-    .from(setupItems)
-    .where(and(eq(setupItems.musicianId, sql.placeholder('musicianId')), eq(setupItems.active, true)))
-    .prepare();
-const setupStatements = new WeakMap<Db, ReturnType<typeof prepareSetup>>();
-
-function setupOf(db: Db, musicianId: string): Today['setup'] {
-  let statement = setupStatements.get(db);
-  if (!statement) {
-    statement = prepareSetup(db);
-    setupStatements.set(db, statement);
-  }
-  return statement.all({ musicianId });
+/** Today's answer as sent: the JSON body and its entity tag. */
+export interface TodayResponse {
+  body: Buffer;
+  etag: string;
 }
 
-/** Today's programme for a musician: the engine's sessions from the plan's current state. */
-export function todayFor(db: Db, musicianId: string, now: Date): Today {
-  const fingerprint = fingerprints(db, { musicianId }).get(musicianId);
-  const programme = cachedProgramme(db, musicianId, fingerprint, now, () => computeProgramme(db, musicianId, now));
-  return { ...programme, setup: setupOf(db, musicianId) };
+// Replaying every check-in through the engine is most of a request's cost and the musician opens this
+// screen many times a day: the answer is kept, serialised, under the caseload rows' fingerprint (their
+// plan, check-ins, overrides and pieces, and the plan's local date) plus the setup reminders, all read
+// by one indexed statement whenever the database's generation has moved, so any write through any path
+// is seen at once.
+const KEY = `select ${FINGERPRINT_COLUMNS},
+    (select json_group_array(json_array(s.id, s.label, s.instructions))
+       from setup_items s where s.musician_id = m.id and s.active = 1) as setup
+  from musicians m where m.user_id = ?`;
+const SETUP = 'select id, label, instructions from setup_items where musician_id = ? and active = 1 order by rowid';
+
+type KeyRow = FingerprintRow & { setup: string };
+interface Statements {
+  key: Statement<[string], KeyRow>;
+  setup: Statement<[string], Today['setup'][number]>;
+}
+const statements = new WeakMap<Db, Statements>();
+
+function statementsFor(db: Db): Statements {
+  let found = statements.get(db);
+  if (!found) {
+    found = { key: db.$client.prepare<[string], KeyRow>(KEY), setup: db.$client.prepare<[string], Today['setup'][number]>(SETUP) };
+    statements.set(db, found);
+  }
+  return found;
+}
+
+const cachedResponse = musicianCache<TodayResponse>();
+
+// While the database's generation stands still, a user's musician and fingerprint cannot have changed.
+interface Key {
+  generation: string;
+  musicianId: string;
+  fingerprint: string;
+}
+const keys = new WeakMap<Db, Map<string, Key>>();
+const MAX_KEYS = 20_000;
+
+function keyOf(db: Db, userId: string): Key {
+  let held = keys.get(db);
+  if (!held) {
+    held = new Map();
+    keys.set(db, held);
+  }
+  const generation = dataGeneration(db);
+  const found = held.get(userId);
+  if (found?.generation === generation) return found;
+  const row = statementsFor(db).key.get(userId);
+  if (!row) throw notFound('Musician record');
+  const key = { generation, musicianId: row.id, fingerprint: `${fingerprintOf(row)}${row.setup}` };
+  if (held.size >= MAX_KEYS) held.clear();
+  held.set(userId, key);
+  return key;
+}
+
+/** The signed-in musician's programme for today, ready to send; 404 without a musician record. */
+export function todayResponseFor(db: Db, userId: string, now: Date): TodayResponse {
+  const { musicianId, fingerprint } = keyOf(db, userId);
+  return cachedResponse(db, musicianId, fingerprint, now, () => {
+    const { part, timeZone } = computeProgramme(db, musicianId, now);
+    const today: Today = { ...part, setup: statementsFor(db).setup.all(musicianId) };
+    const body = Buffer.from(JSON.stringify(today));
+    // The same weak tag Express would compute, once per change instead of once per request.
+    const hash = createHash('sha1').update(body).digest('base64').slice(0, 27);
+    return { part: { body, etag: `W/"${body.length.toString(16)}-${hash}"` }, timeZone };
+  });
 }
 
 function computeProgramme(db: Db, musicianId: string, now: Date): { part: Programme; timeZone: string } {

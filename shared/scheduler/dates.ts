@@ -1,5 +1,4 @@
-import { TZDate, tzOffset } from '@date-fns/tz';
-import { format } from 'date-fns/format';
+import { tzOffset } from '@date-fns/tz';
 
 /**
  * Plan dates are `YYYY-MM-DD` strings in the plan's own time zone. Arithmetic runs on whole day
@@ -34,9 +33,43 @@ export function isoWeekday(day: DayNumber): number {
   return (((day + 3) % 7) + 7) % 7 + 1;
 }
 
+// Building an Intl formatter is the slow part of reading a date in a zone: one per zone, kept.
+const dayFormats = new Map<string, Intl.DateTimeFormat>();
+
+function dayFormatOf(timeZone: string): Intl.DateTimeFormat {
+  let found = dayFormats.get(timeZone);
+  if (!found) {
+    // Throws RangeError for an unknown zone, as a TZDate in it would fail to format.
+    found = new Intl.DateTimeFormat('en-US', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit', calendar: 'gregory', numberingSystem: 'latn' });
+    dayFormats.set(timeZone, found);
+  }
+  return found;
+}
+
+// Zone offsets (and their changes) have fallen on whole minutes everywhere since 1972, so within one minute every instant has the same
+// local date: the last answer per zone is kept for the minute it was asked in.
+const lastAnswers = new Map<string, { minute: number; date: string }>();
+
 /** The local calendar date of an instant in a time zone. */
 export function localDateOf(instant: Date, timeZone: string): string {
-  return format(new TZDate(instant.getTime(), timeZone), 'yyyy-MM-dd');
+  const minute = Math.floor(instant.getTime() / 60_000);
+  const last = lastAnswers.get(timeZone);
+  if (last?.minute === minute) return last.date;
+  const date = formatLocalDate(instant, timeZone);
+  lastAnswers.set(timeZone, { minute, date });
+  return date;
+}
+
+function formatLocalDate(instant: Date, timeZone: string): string {
+  let year = '';
+  let month = '';
+  let day = '';
+  for (const part of dayFormatOf(timeZone).formatToParts(instant)) {
+    if (part.type === 'year') year = part.value.padStart(4, '0');
+    else if (part.type === 'month') month = part.value;
+    else if (part.type === 'day') day = part.value;
+  }
+  return `${year}-${month}-${day}`;
 }
 
 /** Today's plan date: a `YYYY-MM-DD` string is taken as is, an instant is read in the plan's zone. */

@@ -20,9 +20,9 @@ export interface TestContext {
   storage: ReturnType<typeof memoryStorage>;
 }
 
-/** A fresh app on a fresh in-memory database, with a mailer that records what it would send. */
-export function createTestContext(options: { devMailbox?: boolean; failMail?: boolean } = {}): TestContext {
-  const db = openDatabase(':memory:');
+/** A fresh app on a fresh database (in memory unless a file is given), with a mailer that records what it would send. */
+export function createTestContext(options: { devMailbox?: boolean; failMail?: boolean; file?: string } = {}): TestContext {
+  const db = openDatabase(options.file ?? ':memory:');
   migrateDatabase(db);
   const outbox: OutgoingMail[] = [];
   const mailer: Mailer = {
