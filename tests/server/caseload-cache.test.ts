@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
-import { checkIns, planOverrides, plans } from '@/server/db/schema';
+import { checkIns, musicians, planOverrides, plans } from '@/server/db/schema';
 import type { CheckIn } from '@/shared/schemas/check-in';
 import { PlanSettingsSchema } from '@/shared/schemas/plan-settings';
 import { musicianWithPlan } from './support/plan-fixture';
@@ -28,6 +28,13 @@ describe('caseload cache', () => {
     ctx.db.insert(checkIns).values({ id: randomUUID(), musicianId: pia.musicianId, date: painful.date, kind: painful.kind, payload: painful, clientKey: 'k1', recordedAt: ctx.clock.now }).run();
     expect((await entry()).alerts.map((a: { kind: string }) => a.kind)).toEqual(['failed_gate']);
     expect((await record()).lastCheckInDate).toBe('2027-02-27');
+  });
+
+  it('does show a renamed musician when the caseload was read before the change', async () => {
+    const { ctx, pia, entry } = await setup();
+    expect((await entry()).name).not.toBe('Pia Renamed');
+    ctx.db.update(musicians).set({ name: 'Pia Renamed' }).where(eq(musicians.id, pia.musicianId)).run();
+    expect((await entry()).name).toBe('Pia Renamed');
   });
 
   it('does show an override, a new plan version and a removed plan when they are written after a read', async () => {
