@@ -1,15 +1,20 @@
 import { Router } from 'express';
 import { currentUser, requireRole, requireSession } from '../middleware/auth';
+import { perAccountLimit } from '../middleware/user-limit';
 import { sendSummary } from '../services/summary.service';
 import type { AppDeps } from './deps';
+
+// Sending now is for the odd extra copy; the weekly run needs no button.
+export const SEND_NOW_PER_HOUR = 5;
 
 /** The weekly caseload summary, sent on demand (the schedule lives in server/jobs). */
 export function summaryRoutes({ auth, db, mailer, env, now }: AppDeps): Router {
   const router = Router();
   router.use(requireSession(auth), requireRole('clinician'));
 
-  // -> SummarySent; 502 mail_failed when the e-mail could not be handed to SMTP.
-  router.post('/send-now', async (_req, res) => {
+  // -> SummarySent; 502 mail_failed when the e-mail could not be handed to SMTP; 429 after five in an hour.
+  const sendNowLimit = perAccountLimit({ limit: SEND_NOW_PER_HOUR, windowMs: 60 * 60_000, message: 'You have sent five summaries in the last hour. The next one can go out later.' });
+  router.post('/send-now', sendNowLimit, async (_req, res) => {
     try {
       res.json(await sendSummary({ db, mailer, publicUrl: env.PUBLIC_URL }, currentUser(res.locals), now(), true));
     } catch (error) {

@@ -1,5 +1,6 @@
 import { count } from 'drizzle-orm';
 import { notifications } from '@/server/db/schema';
+import { SEND_NOW_PER_HOUR } from '@/server/routes/summary.routes';
 import { isoWeek, sendWeeklySummaries } from '@/server/services/summary.service';
 import type { CheckIn } from '@/shared/schemas/check-in';
 import { musicianWithPlan } from './support/plan-fixture';
@@ -46,6 +47,18 @@ describe('weekly caseload summary', () => {
     expect(ctx.outbox.filter((m) => m.to === fixture.clinicianEmail)).toHaveLength(2);
     const deps = { db: ctx.db, mailer: { send: async () => undefined }, publicUrl: PUBLIC_URL };
     expect((await sendWeeklySummaries(deps, ctx.clock.now))[0]?.sent).toBe(false);
+  });
+
+  it('refuses a sixth summary within the hour, per clinician, without sending it', async () => {
+    const ctx = createTestContext();
+    const fixture = await musicianWithPlan(ctx, { startDate: '2027-02-22' });
+    const clinician = await signedInAgent(ctx, fixture.clinicianEmail);
+    for (let i = 0; i < SEND_NOW_PER_HOUR; i++) await clinician.post('/api/summary/send-now').expect(200);
+    const refused = await clinician.post('/api/summary/send-now').expect(429);
+    expect(refused.body.error).toEqual({ code: 'too_many_requests', message: expect.stringContaining('five summaries') });
+    expect(ctx.outbox.filter((m) => m.to === fixture.clinicianEmail)).toHaveLength(SEND_NOW_PER_HOUR);
+    const other = await musicianWithPlan(ctx, { startDate: '2027-02-22' }, 'rafa');
+    await (await signedInAgent(ctx, other.clinicianEmail)).post('/api/summary/send-now').expect(200);
   });
 
   it('answers 502 and leaves the week unsent when the e-mail cannot go out', async () => {
