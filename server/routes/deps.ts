@@ -10,7 +10,7 @@ export interface AppDeps {
   db: Db;
   auth: Auth;
   mailer: Mailer;
-  env: Pick<Env, 'PUBLIC_URL' | 'NODE_ENV'> & Partial<Pick<Env, 'SIGN_IN_LIMIT_PER_MINUTE'>>;
+  env: Pick<Env, 'PUBLIC_URL' | 'NODE_ENV'> & Partial<Pick<Env, 'SIGN_IN_LIMIT_PER_MINUTE' | 'SUMMARY_TIME_ZONE'>>;
   now: () => Date;
   /** Where document files go: local disk, a hosted object store, or memory in tests. */
   storage: Storage;

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
-import { fromDay, isoWeekday, toDay } from '../../shared/scheduler';
+import { fromDay, isoWeekday, localDateOf, toDay } from '../../shared/scheduler';
 import type { SummarySent } from '../../shared/schemas/summary';
 import type { Db } from '../db/client';
 import { musicians, notifications, user } from '../db/schema';
@@ -17,7 +17,8 @@ export function isoWeek(date: string): string {
   return `${year}-W${String(week).padStart(2, '0')}`;
 }
 
-type SummaryDeps = { db: Db; mailer: Mailer; publicUrl: string };
+/** `timeZone` decides which week a summary belongs to (SUMMARY_TIME_ZONE, the clinic's zone). */
+type SummaryDeps = { db: Db; mailer: Mailer; publicUrl: string; timeZone: string };
 type Clinician = { id: string; name: string; email: string };
 
 /**
@@ -27,7 +28,7 @@ type Clinician = { id: string; name: string; email: string };
  */
 export async function sendSummary(deps: SummaryDeps, clinician: Clinician, now: Date, force: boolean): Promise<SummarySent> {
   const { db } = deps;
-  const week = isoWeek(now.toISOString().slice(0, 10));
+  const week = isoWeek(localDateOf(now, deps.timeZone));
   const entries = listCaseload(db, clinician.id, now, { sort: 'alerts' });
   const dedupeKey = `weekly-summary:${clinician.id}:${week}`;
   const marked = db

@@ -10,6 +10,7 @@ describe('environment', () => {
   it('names the setting that is wrong', () => {
     expect(() => parseEnv({ PORT: 'eighty' })).toThrow(/PORT/);
     expect(() => parseEnv({ SMTP_URL: 'not a url' })).toThrow(/SMTP_URL/);
+    expect(() => parseEnv({ SUMMARY_TIME_ZONE: 'Europe/Atlantis' })).toThrow(/SUMMARY_TIME_ZONE/);
   });
 
   it('refuses the development secret in production', () => {

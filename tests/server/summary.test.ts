@@ -24,7 +24,7 @@ describe('weekly caseload summary', () => {
     const ctx = createTestContext();
     const fixture = await musicianWithPlan(ctx, { startDate: '2027-02-22' }, 'pia', [gatePain]);
     await createAccount(ctx, 'clinician', 'idle@clinic.example');
-    const deps = { db: ctx.db, mailer: { send: async (mail: (typeof ctx.outbox)[number]) => void ctx.outbox.push(mail) }, publicUrl: PUBLIC_URL };
+    const deps = { db: ctx.db, mailer: { send: async (mail: (typeof ctx.outbox)[number]) => void ctx.outbox.push(mail) }, publicUrl: PUBLIC_URL, timeZone: 'Europe/London' };
     const first = await sendWeeklySummaries(deps, new Date('2027-03-01T07:00:00Z'));
     expect(first).toEqual([{ sent: true, week: '2027-W09', musicianCount: 1, to: fixture.clinicianEmail }]);
     const mail = ctx.outbox.at(-1);
@@ -37,6 +37,15 @@ describe('weekly caseload summary', () => {
     expect(ctx.outbox).toHaveLength(2);
   });
 
+  it("files a summary under the clinic's own week, not the UTC one", async () => {
+    const ctx = createTestContext();
+    await musicianWithPlan(ctx, { startDate: '2027-02-22' });
+    const at = new Date('2027-03-07T23:30:00Z'); // Sunday in UTC and London, already Monday 8 March in Berlin
+    const deps = (timeZone: string) => ({ db: ctx.db, mailer: { send: async () => undefined }, publicUrl: PUBLIC_URL, timeZone });
+    expect((await sendWeeklySummaries(deps('Europe/London'), at))[0]?.week).toBe('2027-W09');
+    expect((await sendWeeklySummaries(deps('Europe/Berlin'), at))[0]?.week).toBe('2027-W10');
+  });
+
   it('sends a clinician their summary now, and the scheduled run then skips that week', async () => {
     const ctx = createTestContext();
     const fixture = await musicianWithPlan(ctx, { startDate: '2027-02-22' });
@@ -45,7 +54,7 @@ describe('weekly caseload summary', () => {
     expect(sent).toEqual({ sent: true, week: '2027-W09', musicianCount: 1, to: fixture.clinicianEmail });
     await clinician.post('/api/summary/send-now').expect(200);
     expect(ctx.outbox.filter((m) => m.to === fixture.clinicianEmail)).toHaveLength(2);
-    const deps = { db: ctx.db, mailer: { send: async () => undefined }, publicUrl: PUBLIC_URL };
+    const deps = { db: ctx.db, mailer: { send: async () => undefined }, publicUrl: PUBLIC_URL, timeZone: 'Europe/London' };
     expect((await sendWeeklySummaries(deps, ctx.clock.now))[0]?.sent).toBe(false);
   });
 
