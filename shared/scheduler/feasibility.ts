@@ -48,6 +48,7 @@ export function feasibilityOf(
   ladder: Level[],
   periods: Period[],
   pieces: Piece[],
+  confirmedEarliestEventDate?: string,
 ): Feasibility {
   const readyBy = addDays(settings.event.date, -settings.taperDays - 1);
   const targetIndex = ladder.findIndex((l) => l.minutesPerDay >= settings.targetMinutesPerDay);
@@ -71,7 +72,7 @@ export function feasibilityOf(
   const minutesReachable = level ? level.minutesPerDay : settings.startMinutesPerDay;
   const earliestFeasibleEventDate = feasible
     ? settings.event.date
-    : addDays(doneBy, settings.taperDays + 1);
+    : (confirmedEarliestEventDate ?? addDays(doneBy, settings.taperDays + 1));
   return {
     feasible,
     eventDate: settings.event.date,
@@ -98,7 +99,32 @@ export function feasibilityOf(
 
 /** Feasibility of the plan as built from its settings, before any check-in. */
 export function assessFeasibility(settings: PlanSettings, pieces: Piece[]): Feasibility {
+  const estimate = feasibilityAsBuilt(settings, pieces);
+  if (estimate.feasible) return estimate;
+  return feasibilityAsBuilt(settings, pieces, earliestEventDate(settings, pieces, estimate.earliestFeasibleEventDate));
+}
+
+function feasibilityAsBuilt(settings: PlanSettings, pieces: Piece[], confirmedEarliestEventDate?: string): Feasibility {
   const ladder = buildLadder(settings);
   const periods = buildStages(settings).map((s) => ({ stageIndex: s.index, startDate: s.startDate, endDate: s.endDate }));
-  return feasibilityOf(settings, ladder, periods, pieces);
+  return feasibilityOf(settings, ladder, periods, pieces, confirmedEarliestEventDate);
+}
+
+// The estimate reads this plan's calendar, but the calendar moves with the event (its rest days and
+// taper), so it can be a day or so out. It is confirmed by building the plan for each candidate date,
+// stepping back while the day before also works and forward until one does.
+const SEARCH_DAYS = 28;
+
+function earliestEventDate(settings: PlanSettings, pieces: Piece[], estimate: string): string {
+  const feasibleOn = (date: string) => feasibilityAsBuilt({ ...settings, event: { ...settings.event, date } }, pieces).feasible;
+  let date = estimate;
+  if (feasibleOn(date)) {
+    for (let i = 0; i < SEARCH_DAYS && feasibleOn(addDays(date, -1)); i++) date = addDays(date, -1);
+    return date;
+  }
+  for (let i = 0; i < SEARCH_DAYS; i++) {
+    date = addDays(date, 1);
+    if (feasibleOn(date)) return date;
+  }
+  return estimate;
 }

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import {
   addDays,
+  assessFeasibility,
   buildLadder,
   buildStages,
   daysBetween,
@@ -38,6 +39,20 @@ describe('scheduler invariants (fast-check)', () => {
           expect(stage.minutesPerDay).toBeLessThanOrEqual(prev.minutesPerDay * (1 + s.maxStageGrowthPercent / 100) + 1e-9);
           expect(stage.minutesPerDay).toBeLessThanOrEqual(s.targetMinutesPerDay);
         });
+      }),
+      RUNS,
+    );
+  });
+
+  it('does offer, when a plan is out of reach, an event date that works and a day before it that does not', () => {
+    fc.assert(
+      fc.property(settingsArb, (s) => {
+        const f = assessFeasibility(s, []);
+        fc.pre(!f.feasible);
+        const feasibleOn = (date: string) => assessFeasibility({ ...s, event: { ...s.event, date } }, []).feasible;
+        expect(feasibleOn(f.earliestFeasibleEventDate)).toBe(true);
+        expect(feasibleOn(addDays(f.earliestFeasibleEventDate, -1))).toBe(false);
+        expect(f.message).toContain(`an event on or after ${f.earliestFeasibleEventDate}`);
       }),
       RUNS,
     );
