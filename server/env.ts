@@ -1,15 +1,7 @@
 import { z } from 'zod';
+import { TimeZoneSchema } from '../shared/schemas/local-date';
 
 export const DEFAULT_SUMMARY_TIME_ZONE = 'Europe/London';
-
-function isTimeZone(value: string): boolean {
-  try {
-    new Intl.DateTimeFormat('en-US', { timeZone: value });
-    return true;
-  } catch {
-    return false;
-  }
-}
 
 /** The environment, parsed once. Every setting has a development default so `npm start` needs none. */
 const EnvSchema = z.object({
@@ -31,7 +23,7 @@ const EnvSchema = z.object({
     .transform((value) => value === 'true'),
   // The weekly caseload summary: cron expression and its time zone (Monday 07:00 by default).
   SUMMARY_CRON: z.string().default('0 7 * * 1'),
-  SUMMARY_TIME_ZONE: z.string().refine(isTimeZone, 'not an IANA time zone').default(DEFAULT_SUMMARY_TIME_ZONE),
+  SUMMARY_TIME_ZONE: TimeZoneSchema.default(DEFAULT_SUMMARY_TIME_ZONE),
   WEB_DIR: z.string().default('dist'),
   AUTH_SECRET: z.string().min(32).default('development-only-secret-change-me-0123456789'),
   // An empty value (as .env files often carry) means "not set": use the local fake.

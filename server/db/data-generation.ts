@@ -42,3 +42,25 @@ export function dataGeneration(db: Db): string {
   }
   return `${found.changes.get() as number}.${found.versionThisTurn}`;
 }
+
+/**
+ * A per-database memo of `read(key)` that holds while the generation stands still: anything read from the
+ * database alone (no clock, no outside input) can be kept this way. At most `max` keys per database.
+ */
+export function keptWhileUnchanged<T>(max: number): (db: Db, key: string, read: () => T) => T {
+  const held = new WeakMap<Db, Map<string, { generation: string; value: T }>>();
+  return (db, key, read) => {
+    let entries = held.get(db);
+    if (!entries) {
+      entries = new Map();
+      held.set(db, entries);
+    }
+    const generation = dataGeneration(db);
+    const found = entries.get(key);
+    if (found?.generation === generation) return found.value;
+    const value = read();
+    if (entries.size >= max) entries.clear();
+    entries.set(key, { generation, value });
+    return value;
+  };
+}

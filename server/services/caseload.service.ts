@@ -2,7 +2,7 @@ import { asc, desc, eq } from 'drizzle-orm';
 import { addDays, gateWhere, planSummary, progressionState, redFlagWords, spokenDate, type PlanSummary } from '../../shared/scheduler';
 import type { CaseloadAlert, CaseloadEntry, CaseloadQuery } from '../../shared/schemas/musician';
 import type { Db } from '../db/client';
-import { dataGeneration } from '../db/data-generation';
+import { keptWhileUnchanged } from '../db/data-generation';
 import { checkIns, musicians } from '../db/schema';
 import { cachedPart, fingerprints, type CachedPart } from './caseload-cache';
 import { overThreshold } from './check-in.service';
@@ -104,28 +104,13 @@ const orders: Record<CaseloadQuery['sort'], (a: CaseloadEntry, b: CaseloadEntry)
 };
 
 // A clinician's musicians and their fingerprints, kept while the database's generation stands still.
-interface Roster {
-  generation: string;
-  rows: MusicianRow[];
-  prints: Map<string, string>;
-}
-const rosters = new WeakMap<Db, Map<string, Roster>>();
-const MAX_ROSTERS = 2_000;
+const keptRoster = keptWhileUnchanged<{ rows: MusicianRow[]; prints: Map<string, string> }>(2_000);
 
-function rosterOf(db: Db, clinicianId: string): Roster {
-  let held = rosters.get(db);
-  if (!held) {
-    held = new Map();
-    rosters.set(db, held);
-  }
-  const generation = dataGeneration(db);
-  const found = held.get(clinicianId);
-  if (found?.generation === generation) return found;
-  const rows = db.select().from(musicians).where(eq(musicians.clinicianId, clinicianId)).orderBy(asc(musicians.name)).all();
-  const roster = { generation, rows, prints: fingerprints(db, { clinicianId }) };
-  if (held.size >= MAX_ROSTERS) held.clear();
-  held.set(clinicianId, roster);
-  return roster;
+function rosterOf(db: Db, clinicianId: string) {
+  return keptRoster(db, clinicianId, () => ({
+    rows: db.select().from(musicians).where(eq(musicians.clinicianId, clinicianId)).orderBy(asc(musicians.name)).all(),
+    prints: fingerprints(db, { clinicianId }),
+  }));
 }
 
 /** The clinician's caseload, by name unless asked otherwise (ties stay in name order). */

@@ -3,7 +3,7 @@ import type { Statement } from 'better-sqlite3';
 import { addDays, planSummary, progressionState, sessionsForDate } from '../../shared/scheduler';
 import type { Today } from '../../shared/schemas/today';
 import type { Db } from '../db/client';
-import { dataGeneration } from '../db/data-generation';
+import { keptWhileUnchanged } from '../db/data-generation';
 import { notFound } from '../lib/http-error';
 import { FINGERPRINT_COLUMNS, fingerprintOf, musicianCache, type FingerprintRow } from './caseload-cache';
 import { loadActivePlan } from './plan.service';
@@ -47,29 +47,14 @@ function statementsFor(db: Db): Statements {
 const cachedResponse = musicianCache<TodayResponse>();
 
 // While the database's generation stands still, a user's musician and fingerprint cannot have changed.
-interface Key {
-  generation: string;
-  musicianId: string;
-  fingerprint: string;
-}
-const keys = new WeakMap<Db, Map<string, Key>>();
-const MAX_KEYS = 20_000;
+const keptKey = keptWhileUnchanged<{ musicianId: string; fingerprint: string }>(20_000);
 
-function keyOf(db: Db, userId: string): Key {
-  let held = keys.get(db);
-  if (!held) {
-    held = new Map();
-    keys.set(db, held);
-  }
-  const generation = dataGeneration(db);
-  const found = held.get(userId);
-  if (found?.generation === generation) return found;
-  const row = statementsFor(db).key.get(userId);
-  if (!row) throw notFound('Musician record');
-  const key = { generation, musicianId: row.id, fingerprint: `${fingerprintOf(row)}${row.setup}` };
-  if (held.size >= MAX_KEYS) held.clear();
-  held.set(userId, key);
-  return key;
+function keyOf(db: Db, userId: string) {
+  return keptKey(db, userId, () => {
+    const row = statementsFor(db).key.get(userId);
+    if (!row) throw notFound('Musician record');
+    return { musicianId: row.id, fingerprint: `${fingerprintOf(row)}${row.setup}` };
+  });
 }
 
 /** The signed-in musician's programme for today, ready to send; 404 without a musician record. */

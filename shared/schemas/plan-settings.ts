@@ -1,17 +1,8 @@
 import { z } from 'zod';
-import { LocalDateSchema, LocalTimeSchema } from './local-date';
+import { LocalDateSchema, LocalTimeSchema, TimeZoneSchema } from './local-date';
 import { TierSchema } from './piece';
 
 export { TierSchema, type Tier } from './piece';
-
-function isTimeZone(name: string): boolean {
-  try {
-    new Intl.DateTimeFormat('en-GB', { timeZone: name });
-    return true;
-  } catch {
-    return false;
-  }
-}
 
 const minutes = (min: number, max: number) => z.number().int().min(min).max(max);
 
@@ -30,7 +21,7 @@ const threshold = z.number().int().min(0).max(10);
 
 const PlanSettingsObject = z.object({
   startDate: LocalDateSchema,
-  timeZone: z.string().default('Europe/London').refine(isTimeZone, 'Unknown time zone'),
+  timeZone: TimeZoneSchema.default('Europe/London'),
   event: z.object({ name: z.string().trim().min(1, 'Name the event'), date: LocalDateSchema }),
 
   /** Tolerated playing minutes per day now (BAPAM level 1: 10). */
