@@ -35,7 +35,15 @@ module.exports = {
       displayName: 'app',
       preset: 'jest-expo',
       roots: ['<rootDir>/tests/app'],
-      moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
+      moduleNameMapper: {
+        // The same zod stand-ins as the web bundle (metro.config.js), so these tests prove the forms and
+        // the API client work without zod's locale index, JSON Schema conversion and compiler.
+        '^\\.\\./locales/index\\.c?js$': '<rootDir>/lib/stubs/zod-locales.js',
+        '^(\\.\\./core/|\\./)(json-schema-processors|to-json-schema|json-schema-generator|from-json-schema)\\.c?js$':
+          '<rootDir>/lib/stubs/zod-json-schema.js',
+        '^\\./compile\\.c?js$': '<rootDir>/lib/stubs/zod-compile.js',
+        '^@/(.*)$': '<rootDir>/$1',
+      },
     },
   ],
 };

@@ -11,8 +11,8 @@ export const meKeys = {
 async function fetchMe(signal: AbortSignal) {
   // better-auth answers a signed-out visitor with 200 and no session, so a plain visit to the
   // sign-in page does not fill the browser console with a failed /api/me request.
-  const session = await authClient.getSession({ fetchOptions: { signal } });
-  if (!session.data) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
+  const session = await authClient.getSession({ signal });
+  if (!session) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
   return api('/api/me', { schema: MeSchema, signal });
 }
 

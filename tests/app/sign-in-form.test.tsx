@@ -1,18 +1,12 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react-native';
 import { SignInForm } from '@/components/auth/sign-in-form';
-import { authClient } from '@/lib/auth-client';
-import { renderScreen } from './test-utils';
+import { mockApi, renderScreen } from './test-utils';
 
-jest.mock('@/lib/auth-client', () => ({
-  authClient: { signIn: { email: jest.fn() }, getSession: jest.fn() },
-}));
-
-const signInEmail = jest.mocked(authClient.signIn.email);
-
-afterEach(() => jest.clearAllMocks());
+afterEach(() => jest.restoreAllMocks());
 
 describe('SignInForm', () => {
   it('shows the shared schema messages under the fields when submitted empty', async () => {
+    const calls = mockApi({});
     const onSignedIn = jest.fn();
     renderScreen(<SignInForm onSignedIn={onSignedIn} />);
 
@@ -20,12 +14,12 @@ describe('SignInForm', () => {
 
     expect(await screen.findByText('Enter a valid e-mail address.')).toBeTruthy();
     expect(screen.getByText('Enter your password.')).toBeTruthy();
-    expect(signInEmail).not.toHaveBeenCalled();
+    expect(calls.filter((call) => call.path === '/api/auth/sign-in/email')).toEqual([]);
     expect(onSignedIn).not.toHaveBeenCalled();
   });
 
-  it('sends the normalised e-mail and reports success when the credentials are accepted', async () => {
-    signInEmail.mockResolvedValue({ data: null, error: null });
+  it('posts the normalised e-mail to better-auth and reports success when the credentials are accepted', async () => {
+    const calls = mockApi({ 'POST /api/auth/sign-in/email': { status: 200, body: { redirect: false, token: 't', user: { id: 'u1' } } } });
     const onSignedIn = jest.fn();
     renderScreen(<SignInForm onSignedIn={onSignedIn} />);
 
@@ -34,17 +28,15 @@ describe('SignInForm', () => {
     fireEvent.press(screen.getByTestId('sign-in-submit'));
 
     await waitFor(() => expect(onSignedIn).toHaveBeenCalledTimes(1));
-    expect(signInEmail.mock.calls[0]?.[0]).toEqual({
-      email: 'maren.oakley@linden-clinic.example',
-      password: 'ritorno-demo-2026',
+    expect(calls.find((call) => call.path === '/api/auth/sign-in/email')).toEqual({
+      method: 'POST',
+      path: '/api/auth/sign-in/email',
+      body: { email: 'maren.oakley@linden-clinic.example', password: 'ritorno-demo-2026' },
     });
   });
 
   it('shows the server message above the form when the credentials are refused', async () => {
-    signInEmail.mockResolvedValue({
-      data: null,
-      error: { status: 401, code: 'INVALID_EMAIL_OR_PASSWORD', message: 'Invalid email or password', statusText: 'Unauthorized' },
-    });
+    mockApi({ 'POST /api/auth/sign-in/email': { status: 401, body: { code: 'INVALID_EMAIL_OR_PASSWORD', message: 'Invalid email or password' } } });
     const onSignedIn = jest.fn();
     renderScreen(<SignInForm onSignedIn={onSignedIn} />);
 
@@ -53,6 +45,19 @@ describe('SignInForm', () => {
     fireEvent.press(screen.getByTestId('sign-in-submit'));
 
     expect(await screen.findByText('Invalid email or password')).toBeTruthy();
+    expect(onSignedIn).not.toHaveBeenCalled();
+  });
+
+  it('shows its own words when the refusal carries no message (a rate limit answered without a body)', async () => {
+    jest.spyOn(global, 'fetch').mockResolvedValue(new Response('', { status: 429 }));
+    const onSignedIn = jest.fn();
+    renderScreen(<SignInForm onSignedIn={onSignedIn} />);
+
+    fireEvent.changeText(screen.getByTestId('sign-in-email'), 'ilse.varga@harbourside.example');
+    fireEvent.changeText(screen.getByTestId('sign-in-password'), 'ritorno-demo-2026');
+    fireEvent.press(screen.getByTestId('sign-in-submit'));
+
+    expect(await screen.findByText('That e-mail and password do not match an account.')).toBeTruthy();
     expect(onSignedIn).not.toHaveBeenCalled();
   });
 });
