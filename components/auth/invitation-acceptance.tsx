@@ -1,5 +1,4 @@
 import { StyleSheet, View } from 'react-native';
-import { format } from 'date-fns/format';
 import { spacing } from '@/constants/theme';
 import { useInvitationPreviewQuery } from '@/hooks/use-invitations';
 import { isApiError } from '@/lib/api-client';
@@ -9,6 +8,9 @@ import { LoadingState } from '@/components/ui/loading-state';
 import { AppText } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { AcceptInvitationForm } from './accept-invitation-form';
+
+// "4 March 2027" as date-fns wrote it, from the browser's own Intl: date-fns stays out of the sign-in screens' JavaScript.
+const expiryDate = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' });
 
 export interface InvitationAcceptanceProps {
   token: string;
@@ -43,7 +45,7 @@ export function InvitationAcceptance({ token, onSignedIn }: InvitationAcceptance
         <AppText variant="bodyStrong">{`${invitation.invitedBy} invited you as a ${invitation.role}.`}</AppText>
         <AppText>{purpose}</AppText>
         <AppText variant="caption" tone="muted">
-          {`Account: ${invitation.name}, ${invitation.email}. The link expires on ${format(new Date(invitation.expiresAt), 'd MMMM yyyy')}.`}
+          {`Account: ${invitation.name}, ${invitation.email}. The link expires on ${expiryDate.format(new Date(invitation.expiresAt))}.`}
         </AppText>
       </Card>
       <AcceptInvitationForm token={token} onSignedIn={onSignedIn} />

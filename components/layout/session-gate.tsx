@@ -1,3 +1,4 @@
+import { Suspense } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Redirect, Slot } from 'expo-router';
 import { spacing } from '@/constants/theme';
@@ -6,19 +7,21 @@ import { useTheme } from '@/hooks/use-theme';
 import { isApiError } from '@/lib/api-client';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
-import { AppShell } from './app-shell';
+import { AppShell, loadSignedInScreens } from './lazy-screens';
 
 /** Signed-in screens only: loads the account, sends a signed-out visitor to sign-in. */
 export function SessionGate() {
   const { colors } = useTheme();
   const me = useMeQuery();
-  if (me.isPending) {
-    return (
-      <View style={[styles.center, { backgroundColor: colors.background }]}>
-        <LoadingState label="Opening Ritorno…" />
-      </View>
-    );
-  }
+  // The signed-in screens' chunk downloads while the account loads, not after it (in the browser only:
+  // pre-rendering stops at the loading state).
+  if (typeof window !== 'undefined') loadSignedInScreens().catch(() => undefined);
+  const opening = (
+    <View style={[styles.center, { backgroundColor: colors.background }]}>
+      <LoadingState label="Opening Ritorno…" />
+    </View>
+  );
+  if (me.isPending) return opening;
   if (me.isError) {
     if (isApiError(me.error) && me.error.status === 401) return <Redirect href="/sign-in" />;
     return (
@@ -28,9 +31,11 @@ export function SessionGate() {
     );
   }
   return (
-    <AppShell me={me.data}>
-      <Slot />
-    </AppShell>
+    <Suspense fallback={opening}>
+      <AppShell me={me.data}>
+        <Slot />
+      </AppShell>
+    </Suspense>
   );
 }
 

@@ -1,4 +1,4 @@
-import Svg, { Circle, Rect } from 'react-native-svg';
+import { StyleSheet, View } from 'react-native';
 import { useTheme } from '@/hooks/use-theme';
 
 export interface LogoMarkProps {
@@ -8,16 +8,35 @@ export interface LogoMarkProps {
 /**
  * Ritorno's mark: a start-repeat sign from music notation (thick bar, thin bar, two dots),
  * the written instruction to go back and play again, on a rounded tile.
+ * Drawn with plain views on a 32-unit grid: it is on every screen, sign-in included, and an SVG
+ * renderer would add its whole library to the JavaScript a first visit downloads.
  */
 export function LogoMark({ size = 32 }: LogoMarkProps) {
   const { colors } = useTheme();
+  const unit = size / 32;
+  const box = (x: number, y: number, width: number, height: number, radius: number) => ({
+    left: x * unit,
+    top: y * unit,
+    width: width * unit,
+    height: height * unit,
+    borderRadius: radius * unit,
+  });
   return (
-    <Svg width={size} height={size} viewBox="0 0 32 32" accessibilityElementsHidden importantForAccessibility="no">
-      <Rect x={0} y={0} width={32} height={32} rx={9} fill={colors.primary} />
-      <Rect x={8} y={7} width={4.5} height={18} rx={1} fill={colors.onPrimary} />
-      <Rect x={15} y={7} width={1.6} height={18} rx={0.8} fill={colors.onPrimary} />
-      <Circle cx={21.5} cy={12.5} r={2.2} fill={colors.accent} />
-      <Circle cx={21.5} cy={19.5} r={2.2} fill={colors.accent} />
-    </Svg>
+    <View
+      style={[styles.tile, box(0, 0, 32, 32, 9), { backgroundColor: colors.primary }]}
+      accessibilityElementsHidden
+      importantForAccessibility="no-hide-descendants"
+      aria-hidden
+    >
+      <View style={[styles.shape, box(8, 7, 4.5, 18, 1), { backgroundColor: colors.onPrimary }]} />
+      <View style={[styles.shape, box(15, 7, 1.6, 18, 0.8), { backgroundColor: colors.onPrimary }]} />
+      <View style={[styles.shape, box(19.3, 10.3, 4.4, 4.4, 2.2), { backgroundColor: colors.accent }]} />
+      <View style={[styles.shape, box(19.3, 17.3, 4.4, 4.4, 2.2), { backgroundColor: colors.accent }]} />
+    </View>
   );
 }
+
+const styles = StyleSheet.create({
+  tile: { position: 'relative', overflow: 'hidden' },
+  shape: { position: 'absolute' },
+});

@@ -1,4 +1,4 @@
-import { UserList } from '@/components/admin/user-list';
+import { UserList } from '@/components/layout/lazy-screens';
 import { Screen } from '@/components/ui/screen';
 
 export default function UsersScreen() {

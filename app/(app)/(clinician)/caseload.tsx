@@ -1,4 +1,4 @@
-import { CaseloadView } from '@/components/caseload/caseload-view';
+import { CaseloadView } from '@/components/layout/lazy-screens';
 
 export default function CaseloadScreen() {
   return <CaseloadView />;

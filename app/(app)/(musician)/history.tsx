@@ -1,4 +1,4 @@
-import { HistoryView } from '@/components/history/history-view';
+import { HistoryView } from '@/components/layout/lazy-screens';
 
 export default function HistoryScreen() {
   return <HistoryView />;

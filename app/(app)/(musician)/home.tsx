@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { TodayView } from '@/components/today/today-view';
+import { TodayView } from '@/components/layout/lazy-screens';
 
 /** The musician's landing: today. `speed` is handed on to a started session's clock (tests, demos). */
 export default function TodayScreen() {

@@ -1,4 +1,4 @@
-import { MyPlanView } from '@/components/my-plan/my-plan-view';
+import { MyPlanView } from '@/components/layout/lazy-screens';
 
 export default function MyPlanScreen() {
   return <MyPlanView />;

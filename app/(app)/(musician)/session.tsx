@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { SessionScreen } from '@/components/today/session-screen';
+import { SessionScreen } from '@/components/layout/lazy-screens';
 
 /** /session?index=0 runs one of today's sessions; `speed` multiplies its clock (tests, demonstrations). */
 export default function SessionRoute() {

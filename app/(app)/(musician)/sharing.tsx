@@ -1,4 +1,4 @@
-import { SharingView } from '@/components/sharing/sharing-view';
+import { SharingView } from '@/components/layout/lazy-screens';
 
 export default function SharingScreen() {
   return <SharingView />;

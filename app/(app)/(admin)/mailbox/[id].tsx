@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { MailMessage } from '@/components/admin/mail-message';
+import { MailMessage } from '@/components/layout/lazy-screens';
 import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 

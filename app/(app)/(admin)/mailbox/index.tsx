@@ -1,4 +1,4 @@
-import { MailList } from '@/components/admin/mail-list';
+import { MailList } from '@/components/layout/lazy-screens';
 import { Screen } from '@/components/ui/screen';
 
 export default function MailboxScreen() {

@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { StudentClearanceView } from '@/components/teacher/student-clearance-view';
+import { StudentClearanceView } from '@/components/layout/lazy-screens';
 
 export default function StudentClearanceScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,6 @@
 import { Banner } from '@/components/ui/banner';
 import { Screen } from '@/components/ui/screen';
-import { StudentList } from '@/components/teacher/student-list';
+import { StudentList } from '@/components/layout/lazy-screens';
 
 export default function StudentsScreen() {
   return (

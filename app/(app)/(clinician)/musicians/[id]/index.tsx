@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { RecordView } from '@/components/record/record-view';
+import { RecordView } from '@/components/layout/lazy-screens';
 import { isRecordTab } from '@/components/record/record-tabs';
 
 export default function MusicianRecordScreen() {

@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { PlanBuilderScreen } from '@/components/plan-builder/plan-builder-screen';
+import { PlanBuilderScreen } from '@/components/layout/lazy-screens';
 
 export default function NewPlanVersionScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
