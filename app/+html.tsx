@@ -1,11 +1,14 @@
 import type { PropsWithChildren } from 'react';
 import { ScrollViewStyleReset } from 'expo-router/html';
-import { colors } from '@/constants/theme';
+import { breakpoints, colors } from '@/constants/theme';
 
 // The page background follows the system appearance before React starts, so there is no white flash.
+// Every page is pre-rendered as a phone in light mode, shown at once there; a wider or dark screen keeps
+// it hidden until React has redrawn it for that screen (app/_layout.tsx sets data-ready).
 const background = `
 body { background-color: ${colors.light.background}; }
 @media (prefers-color-scheme: dark) { body { background-color: ${colors.dark.background}; } }
+@media (min-width: ${breakpoints.medium}px), (prefers-color-scheme: dark) { #root:not([data-ready]) { visibility: hidden; } }
 `;
 
 /** The web document. The viewport keeps pinch-zoom on purpose: never add user-scalable=no. */

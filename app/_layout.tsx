@@ -2,11 +2,13 @@ import { useEffect } from 'react';
 import { Platform } from 'react-native';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { DarkTheme, DefaultTheme, Slot, ThemeProvider } from 'expo-router';
-import { FontDisplay, useFonts, type FontSource } from 'expo-font';
+import { FontDisplay, loadAsync, useFonts } from 'expo-font';
+import Head from 'expo-router/head';
 import * as SplashScreen from 'expo-splash-screen';
 import { StatusBar } from 'expo-status-bar';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { fontFiles } from '@/constants/theme';
+import { useTakenOver } from '@/hooks/use-taken-over';
 import { useTheme } from '@/hooks/use-theme';
 import { queryClient } from '@/lib/query-client';
 
@@ -16,18 +18,29 @@ SplashScreen.preventAutoHideAsync().catch(() => undefined);
 // On the web, waiting for four font files before the first paint cost seconds on a slow phone
 // connection: there every family is followed by a system stack (constants/theme.ts), text shows at once
 // in it and the face swaps in when it arrives (font-display: swap). Native apps keep the splash hold.
+// The web pages are pre-rendered, and the fonts are asked for only in the browser, once this module
+// runs: registered during pre-rendering, every page would preload them and they would compete with the
+// app's script on a slow connection. (The icon font: components/ui/icon.tsx.)
 const onWeb = Platform.OS === 'web';
-const fontSources: Record<string, FontSource> = onWeb
-  ? Object.fromEntries(Object.entries(fontFiles).map(([name, uri]) => [name, { uri, display: FontDisplay.SWAP }]))
-  : fontFiles;
+if (onWeb && typeof window !== 'undefined') {
+  const webFonts = Object.entries(fontFiles).map(([name, uri]) => [name, { uri, display: FontDisplay.SWAP }]);
+  loadAsync(Object.fromEntries(webFonts)).catch(() => undefined);
+}
 
 export default function RootLayout() {
-  const [fontsLoaded, fontError] = useFonts(fontSources);
+  const [fontsLoaded, fontError] = useFonts(onWeb ? {} : fontFiles);
   const { scheme, colors } = useTheme();
+  const takenOver = useTakenOver();
 
   useEffect(() => {
     if (fontsLoaded || fontError) SplashScreen.hideAsync().catch(() => undefined);
   }, [fontsLoaded, fontError]);
+
+  // Wide and dark screens keep the pre-rendered (phone, light) page hidden until React has redrawn it
+  // for them (+html.tsx): they see the page once, as before, instead of a phone page that then changes.
+  useEffect(() => {
+    if (onWeb && takenOver) document.getElementById('root')?.setAttribute('data-ready', 'true');
+  }, [takenOver]);
 
   if (!fontsLoaded && !fontError && !onWeb) return null;
 
@@ -47,6 +60,9 @@ export default function RootLayout() {
 
   return (
     <SafeAreaProvider>
+      <Head>
+        <title>Ritorno</title>
+      </Head>
       <QueryClientProvider client={queryClient}>
         <ThemeProvider value={navigationTheme}>
           <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />

@@ -1,12 +1,12 @@
 import type { ComponentProps } from 'react';
-import type Ionicons from '@expo/vector-icons/Ionicons';
+import type { IconName } from '@/components/ui/icon';
 import type { Role } from '@/shared/schemas/role';
 import { isMailboxOff, useDevMailQuery } from './use-dev-mail';
 
 export interface NavItem {
   href: '/caseload' | '/home' | '/plan' | '/history' | '/students' | '/users' | '/audit' | '/mailbox' | '/sharing';
   label: string;
-  icon: ComponentProps<typeof Ionicons>['name'];
+  icon: IconName;
   testID: string;
 }
 

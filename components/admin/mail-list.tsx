@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { Link } from 'expo-router';
 import { format } from 'date-fns/format';
 import { radii, spacing, touchTarget } from '@/constants/theme';
@@ -53,7 +53,7 @@ export function MailList() {
                 {`To ${message.to.join(', ')} · ${format(new Date(message.receivedAt), 'd MMM, HH:mm')}`}
               </AppText>
             </View>
-            <Ionicons name="chevron-forward" size={18} color={colors.textMuted} />
+            <Icon name="chevron-forward" size={18} color={colors.textMuted} />
           </Pressable>
         </Link>
       ))}

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { maxFormWidth, radii, spacing } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import { useTheme } from '@/hooks/use-theme';
@@ -33,7 +33,7 @@ export function AuthFrame({ testID, title, lead, children }: AuthFrameProps) {
             <AppText variant="display">Back to playing, one stage at a time.</AppText>
             {points.map((point) => (
               <View key={point.icon} style={styles.point}>
-                <Ionicons name={point.icon} size={22} color={colors.accent} />
+                <Icon name={point.icon} size={22} color={colors.accent} />
                 <AppText style={styles.pointText}>{point.text}</AppText>
               </View>
             ))}

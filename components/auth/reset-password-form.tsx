@@ -5,6 +5,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { spacing } from '@/constants/theme';
 import { useResetPasswordMutation } from '@/hooks/use-auth';
+import { useTakenOver } from '@/hooks/use-taken-over';
 import { applyServerErrors } from '@/lib/form-errors';
 import { PASSWORD_MIN_LENGTH, ResetPasswordSchema } from '@/shared/schemas/auth';
 import { Banner } from '@/components/ui/banner';
@@ -18,6 +19,8 @@ export interface ResetPasswordFormProps {
 
 export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   const reset = useResetPasswordMutation();
+  // The pre-rendered page cannot see the link's token: say it is missing only once the app runs.
+  const takenOver = useTakenOver();
   const [formError, setFormError] = useState('');
   const [done, setDone] = useState(false);
   const { control, handleSubmit, setError, formState } = useForm<
@@ -53,7 +56,7 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   const tokenError = formState.errors.token?.message;
   return (
     <View style={styles.form}>
-      {tokenError || !token ? (
+      {tokenError || (!token && takenOver) ? (
         <Banner tone="danger" testID="reset-token-error">
           {tokenError ?? 'This reset link is incomplete. Open the link from the e-mail again, or ask for a new one.'}
         </Banner>

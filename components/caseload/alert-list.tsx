@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { CaseloadAlert } from '@/shared/schemas/musician';
@@ -28,7 +28,7 @@ export function AlertList({ alerts, compact = false }: { alerts: readonly Caselo
         const urgent = alert.severity === 'urgent';
         return (
           <View key={`${alert.kind}-${alert.date ?? ''}`} style={styles.row} testID={`alert-${alert.kind}`}>
-            <Ionicons name={urgent ? 'alert-circle' : 'warning-outline'} size={16} color={urgent ? colors.danger : colors.warning} style={styles.icon} />
+            <Icon name={urgent ? 'alert-circle' : 'warning-outline'} size={16} color={urgent ? colors.danger : colors.warning} style={styles.icon} />
             <View style={styles.text}>
               <AppText variant="label" tone={urgent ? 'danger' : 'warning'}>
                 {`${urgent ? 'Urgent · ' : ''}${kindWords[alert.kind]}`}

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { CaseloadEntry } from '@/shared/schemas/musician';
@@ -20,7 +20,7 @@ export function CaseloadCard({ entry }: { entry: CaseloadEntry }) {
       <View style={styles.head}>
         <RecordLink entry={entry} />
         <View style={styles.instrument}>
-          <Ionicons name="musical-note-outline" size={16} color={colors.textMuted} />
+          <Icon name="musical-note-outline" size={16} color={colors.textMuted} />
           <AppText tone="muted">{entry.instrument}</AppText>
         </View>
       </View>

@@ -1,6 +1,6 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { CaseloadEntry } from '@/shared/schemas/musician';
@@ -21,7 +21,7 @@ export function RecordLink({ entry }: { entry: CaseloadEntry }) {
           <AppText variant="bodyStrong" tone="primary" style={styles.name}>
             {entry.name}
           </AppText>
-          <Ionicons name="chevron-forward" size={16} color={colors.primary} />
+          <Icon name="chevron-forward" size={16} color={colors.primary} />
         </View>
       </Pressable>
     </Link>

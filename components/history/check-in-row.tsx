@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { format } from 'date-fns/format';
 import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
@@ -28,7 +28,7 @@ export function CheckInRow({ checkIn }: { checkIn: CheckIn }) {
   const icon = flagged ? 'alert-circle' : pain > 0 ? 'warning-outline' : checkIn.kind === 'session' ? 'musical-notes-outline' : 'sunny-outline';
   return (
     <View style={[styles.row, { borderBottomColor: colors.border }]} testID="history-row">
-      <Ionicons name={icon} size={20} color={flagged || pain > 0 ? colors.danger : colors.accent} style={styles.icon} />
+      <Icon name={icon} size={20} color={flagged || pain > 0 ? colors.danger : colors.accent} style={styles.icon} />
       <View style={styles.flex}>
         <AppText variant="bodyStrong">{`${title} · ${format(parseISO(checkIn.date), 'EEE d MMM')}`}</AppText>
         <AppText variant="caption">{detail}</AppText>

@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { Link } from 'expo-router';
 import { radii, spacing, touchTarget } from '@/constants/theme';
 import type { NavItem } from '@/hooks/use-nav-items';
@@ -21,7 +21,6 @@ export function NavLink({ item, active, compact = false }: NavLinkProps) {
         testID={item.testID}
         accessibilityRole="link"
         accessibilityLabel={item.label}
-        accessibilityState={{ selected: active }}
         aria-current={active ? 'page' : undefined}
         // One flat style object: on the web Link's asChild hands the style straight to the anchor element.
         style={StyleSheet.flatten([
@@ -31,7 +30,7 @@ export function NavLink({ item, active, compact = false }: NavLinkProps) {
           active && { backgroundColor: colors.surfaceMuted },
         ])}
       >
-        <Ionicons name={item.icon} size={20} color={active ? colors.primary : colors.textMuted} />
+        <Icon name={item.icon} size={20} color={active ? colors.primary : colors.textMuted} />
         <AppText variant={compact ? 'label' : active ? 'bodyStrong' : 'body'} tone={active ? 'primary' : 'default'} numberOfLines={1}>
           {item.label}
         </AppText>

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { format } from 'date-fns/format';
 import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
@@ -23,7 +23,7 @@ export function PlanSummary({ plan, clinicianName }: PlanSummaryProps) {
     return (
       <Card testID="plan-summary-empty">
         <View style={styles.row}>
-          <Ionicons name="calendar-outline" size={24} color={colors.accent} />
+          <Icon name="calendar-outline" size={24} color={colors.accent} />
           <AppText variant="heading" style={styles.flex}>
             No plan yet — your clinician will prepare one
           </AppText>

@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { useController, type Control } from 'react-hook-form';
 import { spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
@@ -17,11 +17,11 @@ export function NextMorningToggle({ control }: { control: Control<PlanFormValues
       testID="plan-requireNextMorningCheck"
       accessibilityRole="checkbox"
       accessibilityLabel="Count a day only after a symptom-free next morning"
-      accessibilityState={{ checked: on }}
+      aria-checked={on}
       onPress={() => field.onChange(!on)}
       style={styles.row}
     >
-      <Ionicons name={on ? 'checkbox' : 'square-outline'} size={24} color={on ? colors.primary : colors.textMuted} />
+      <Icon name={on ? 'checkbox' : 'square-outline'} size={24} color={on ? colors.primary : colors.textMuted} />
       <View style={styles.text}>
         <AppText variant="label">Count a day only after a symptom-free next morning</AppText>
         <AppText variant="caption" tone="muted">{on ? 'On: symptoms may come later or the next day.' : 'Off: a day counts once its sessions pass.'}</AppText>

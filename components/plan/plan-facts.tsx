@@ -1,6 +1,6 @@
 import type { ComponentProps } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon, type IconName } from '@/components/ui/icon';
 import { radii, spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { PlanOverview } from '@/shared/schemas/plan-overview';
@@ -9,7 +9,7 @@ import { AppText } from '@/components/ui/text';
 const tierLabel = { easy: 'Easy pieces', moderate: 'Up to moderate pieces', demanding: 'All pieces, demanding included' } as const;
 
 interface Fact {
-  icon: ComponentProps<typeof Ionicons>['name'];
+  icon: IconName;
   label: string;
   value: string;
 }
@@ -28,7 +28,7 @@ export function PlanFacts({ plan }: { plan: PlanOverview }) {
       {facts.map((fact) => (
         <View key={fact.label} style={[styles.fact, { backgroundColor: colors.surfaceMuted }]}>
           <View style={styles.head}>
-            <Ionicons name={fact.icon} size={16} color={colors.accent} />
+            <Icon name={fact.icon} size={16} color={colors.accent} />
             <AppText variant="label" tone="muted">
               {fact.label}
             </AppText>

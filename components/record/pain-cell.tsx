@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { CheckInRow } from '@/shared/schemas/record';
@@ -13,7 +13,7 @@ export function PainCell({ row }: { row: CheckInRow }) {
   return (
     <View style={styles.cell}>
       <View style={styles.line}>
-        {flagged ? <Ionicons name="alert-circle" size={14} color={colors.danger} /> : null}
+        {flagged ? <Icon name="alert-circle" size={14} color={colors.danger} /> : null}
         <AppText variant="caption" tone={flagged ? 'danger' : 'default'}>
           {painWords(row)}
         </AppText>

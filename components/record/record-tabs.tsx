@@ -32,7 +32,7 @@ export function RecordTabs({ value, onChange }: { value: RecordTab; onChange: (t
             testID={`record-tab-${tab.value}`}
             accessibilityRole="tab"
             accessibilityLabel={tab.label}
-            accessibilityState={{ selected }}
+            aria-selected={selected}
             onPress={() => onChange(tab.value)}
             style={[styles.tab, selected && { borderBottomColor: colors.primary, backgroundColor: colors.surfaceMuted }]}
           >

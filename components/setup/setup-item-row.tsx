@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing, touchTarget } from '@/constants/theme';
 import { useDeleteSetupItemMutation, useUpdateSetupItemMutation } from '@/hooks/use-setup';
 import { useTheme } from '@/hooks/use-theme';
@@ -20,11 +20,12 @@ export function SetupItemRow({ id, item }: { id: string; item: SetupItem }) {
         testID={`setup-active-${item.id}`}
         accessibilityRole="switch"
         accessibilityLabel={`Remind the musician: ${item.label}`}
-        accessibilityState={{ checked: item.active, busy: update.isPending }}
+        aria-checked={item.active}
+        aria-busy={update.isPending}
         onPress={() => update.mutate({ itemId: item.id, body: { active: !item.active } })}
         style={styles.toggle}
       >
-        <Ionicons name={item.active ? 'checkbox' : 'square-outline'} size={24} color={item.active ? colors.primary : colors.textMuted} />
+        <Icon name={item.active ? 'checkbox' : 'square-outline'} size={24} color={item.active ? colors.primary : colors.textMuted} />
         <View style={styles.text}>
           <AppText variant="bodyStrong">{item.label}</AppText>
           <AppText variant="caption" tone="muted">{`${setupKindWords[item.kind]} · ${item.active ? 'active: shown to the musician' : 'paused: not shown'}`}</AppText>

@@ -1,6 +1,6 @@
 import type { ComponentProps } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon, type IconName } from '@/components/ui/icon';
 import { radii, spacing } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import { useTheme } from '@/hooks/use-theme';
@@ -10,7 +10,7 @@ import { AppText } from '@/components/ui/text';
 
 interface Fact {
   key: string;
-  icon: ComponentProps<typeof Ionicons>['name'];
+  icon: IconName;
   label: string;
   value: string;
   detail?: string;
@@ -50,7 +50,7 @@ export function ClearanceLimits({ clearance }: { clearance: StudentClearance }) 
           style={[styles.fact, !isMedium && styles.factCompact, { backgroundColor: colors.surface, borderColor: colors.border }]}
         >
           <View style={styles.labelRow}>
-            <Ionicons name={fact.icon} size={18} color={colors.primary} />
+            <Icon name={fact.icon} size={18} color={colors.primary} />
             <AppText variant="label" tone="muted">
               {fact.label}
             </AppText>

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { formatPlanDate } from '@/lib/plan-dates';
@@ -23,7 +23,7 @@ export function ClearanceMark({ cleared, expectedOn, asOf, testID }: ClearanceMa
       : 'Not yet · no date for now';
   return (
     <View style={styles.row} testID={testID}>
-      <Ionicons
+      <Icon
         name={cleared ? 'checkmark-circle' : 'ellipse-outline'}
         size={18}
         color={cleared ? colors.success : colors.textMuted}

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { daysToGo, formatPlanDate } from '@/lib/plan-dates';
@@ -24,7 +24,7 @@ export function EventCountdown({ event, asOf, testID }: EventCountdownProps) {
   }
   return (
     <View style={styles.row} testID={testID}>
-      <Ionicons name="calendar-outline" size={16} color={colors.textMuted} style={styles.icon} />
+      <Icon name="calendar-outline" size={16} color={colors.textMuted} style={styles.icon} />
       <View style={styles.text}>
         <AppText variant="bodyStrong">{event.name}</AppText>
         <AppText variant="caption" tone="muted">

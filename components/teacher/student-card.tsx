@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { Link } from 'expo-router';
 import { radii, spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
@@ -27,11 +27,11 @@ export function StudentCard({ student }: { student: StudentSummary }) {
             <View style={styles.names}>
               <AppText variant="heading">{student.name}</AppText>
               <View style={styles.line}>
-                <Ionicons name="musical-note-outline" size={16} color={colors.textMuted} />
+                <Icon name="musical-note-outline" size={16} color={colors.textMuted} />
                 <AppText tone="muted">{student.instrument}</AppText>
               </View>
             </View>
-            <Ionicons name="chevron-forward" size={22} color={colors.textMuted} />
+            <Icon name="chevron-forward" size={22} color={colors.textMuted} />
           </View>
           <ReadinessBadge readiness={student.readiness} />
           <EventCountdown event={student.event} asOf={student.asOf} />

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { StudentClearance } from '@/shared/schemas/clearance';
@@ -21,7 +21,7 @@ export function StudentHeader({ clearance }: { clearance: StudentClearance }) {
     <Card testID="student-header" style={styles.card}>
       <View style={styles.block}>
         <View style={styles.line}>
-          <Ionicons name="musical-note-outline" size={16} color={colors.textMuted} />
+          <Icon name="musical-note-outline" size={16} color={colors.textMuted} />
           <AppText>{clearance.instrument}</AppText>
         </View>
         <EventCountdown event={clearance.event} asOf={clearance.asOf} />

@@ -26,7 +26,7 @@ export function EffortPicker({ value, onChange }: EffortPickerProps) {
               testID={`effort-${score}`}
               accessibilityRole="radio"
               accessibilityLabel={`Effort ${score}: ${effortWord(score)}`}
-              accessibilityState={{ checked: selected }}
+              aria-checked={selected}
               onPress={() => onChange(score)}
               style={[styles.cell, { borderColor: selected ? colors.primary : colors.borderStrong, backgroundColor: selected ? colors.primary : colors.surface }]}
             >

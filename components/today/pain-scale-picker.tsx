@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { fonts, fontSizes, radii, spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from '@/components/ui/text';
@@ -29,14 +29,14 @@ export function PainScalePicker({ value, onChange, testIDPrefix, label = 'Pain r
               testID={`${testIDPrefix}-${score}`}
               accessibilityRole="radio"
               accessibilityLabel={`Pain ${score} of 10: ${painWord(score)}`}
-              accessibilityState={{ checked: selected }}
+              aria-checked={selected}
               onPress={() => onChange(score)}
               style={[
                 styles.cell,
                 { borderColor: selected ? colors.primary : colors.borderStrong, backgroundColor: selected ? colors.primary : colors.surface },
               ]}
             >
-              {selected ? <Ionicons name="checkmark" size={14} color={colors.onPrimary} /> : null}
+              {selected ? <Icon name="checkmark" size={14} color={colors.onPrimary} /> : null}
               <AppText style={[styles.number, { color: selected ? colors.onPrimary : colors.text }]}>{String(score)}</AppText>
             </Pressable>
           );

@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { radii, spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { RedFlag } from '@/shared/schemas/check-in';
@@ -27,11 +27,11 @@ export function RedFlagQuestions({ value, onChange, testIDPrefix }: RedFlagQuest
             testID={`${testIDPrefix}-${flag}`}
             accessibilityRole="checkbox"
             accessibilityLabel={question}
-            accessibilityState={{ checked }}
+            aria-checked={checked}
             onPress={() => toggle(flag)}
             style={[styles.row, { borderColor: checked ? colors.danger : colors.border, backgroundColor: checked ? colors.dangerSurface : colors.surface }]}
           >
-            <Ionicons name={checked ? 'checkbox' : 'square-outline'} size={24} color={checked ? colors.danger : colors.textMuted} />
+            <Icon name={checked ? 'checkbox' : 'square-outline'} size={24} color={checked ? colors.danger : colors.textMuted} />
             <AppText style={styles.text}>{question}</AppText>
             <AppText variant="label" tone={checked ? 'danger' : 'muted'}>
               {checked ? 'Yes' : 'No'}

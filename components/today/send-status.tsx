@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { SendOutcome } from '@/lib/check-in-queue';
@@ -20,7 +20,7 @@ export function SendStatus({ outcome }: { outcome: SendOutcome | undefined }) {
           };
   return (
     <View testID="send-status" accessibilityRole="text" accessibilityLiveRegion="polite" style={styles.row}>
-      <Ionicons name={look.icon} size={20} color={look.color} />
+      <Icon name={look.icon} size={20} color={look.color} />
       <AppText variant="label">{look.text}</AppText>
     </View>
   );

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { DaySession } from '@/shared/schemas/today';
@@ -34,7 +34,7 @@ export function SessionCard({ session, canStart, onStart, painThreshold }: Sessi
       <View style={styles.items}>
         {session.items.map((item) => (
           <View key={`${item.kind}-${item.startMinute}-${item.gate?.position ?? ''}`} style={styles.item}>
-            <Ionicons name={icons[item.kind]} size={18} color={item.kind === 'rest' ? colors.info : colors.accent} />
+            <Icon name={icons[item.kind]} size={18} color={item.kind === 'rest' ? colors.info : colors.accent} />
             <AppText variant={item.kind === 'gate' ? 'caption' : 'body'} tone={item.kind === 'gate' ? 'muted' : 'default'}>
               {sessionItemLine(item, painThreshold)}
             </AppText>

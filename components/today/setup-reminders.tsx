@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import type { SetupReminder } from '@/shared/schemas/today';
@@ -15,7 +15,7 @@ export function SetupReminders({ items }: { items: SetupReminder[] }) {
       <AppText variant="heading">Your setup</AppText>
       {items.map((item) => (
         <View key={item.id} style={styles.row}>
-          <Ionicons name="construct-outline" size={18} color={colors.accent} style={styles.icon} />
+          <Icon name="construct-outline" size={18} color={colors.accent} style={styles.icon} />
           <View style={styles.text}>
             <AppText variant="bodyStrong">{item.label}</AppText>
             {item.instructions ? <AppText variant="caption" tone="muted">{item.instructions}</AppText> : null}

@@ -47,7 +47,9 @@ export function TodayView({ speed = 1 }: { speed?: number }) {
       title="Today"
       lead={data ? `${format(parseISO(data.date), 'EEEE d MMMM')} · stage ${data.overview.stageNumber} of ${data.overview.stageCount}` : undefined}
       actions={data ? <Button testID="report-pain" label="Report pain" icon="medkit-outline" variant="secondary" onPress={() => setReporting(true)} /> : null}
-      footer={<CautionCard audience="musician" />}
+      // Below the content, so it waits for the day: shown while loading, it sat under the spinner and was
+      // pushed off the screen when the sessions arrived, the page's largest layout shift.
+      footer={today.isPending ? null : <CautionCard audience="musician" />}
     >
       {today.isPending ? <LoadingState label="Loading today…" /> : null}
       {today.isError && !noPlan ? <ErrorState error={today.error} onRetry={() => today.refetch()} testID="today-error" /> : null}
@@ -81,7 +83,7 @@ export function TodayView({ speed = 1 }: { speed?: number }) {
           <PainReportSheet date={data.date} visible={reporting} onClose={() => setReporting(false)} />
         </>
       ) : null}
-      {home.data ? (
+      {home.data && !today.isPending ? (
         <AppText variant="caption" tone="muted" testID="musician-profile">
           {`${home.data.name} · ${home.data.instrument} · Clinician: ${home.data.clinicianName}`}
         </AppText>

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { radii, spacing, type ColorTokens } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
@@ -28,10 +28,11 @@ export function Banner({ tone, title, children, testID }: BannerProps) {
   return (
     <View
       testID={testID}
-      accessibilityRole={tone === 'danger' ? 'alert' : 'summary'}
+      // "note", not RN's "summary": on the web that becomes an unnamed region, which checkers flag.
+      role={tone === 'danger' ? 'alert' : 'note'}
       style={[styles.box, { backgroundColor: colors[bg], borderColor: colors[fg] }]}
     >
-      <Ionicons name={icon} size={20} color={colors[fg]} style={styles.icon} />
+      <Icon name={icon} size={20} color={colors[fg]} style={styles.icon} />
       <View style={styles.body}>
         {title ? <AppText variant="bodyStrong">{title}</AppText> : null}
         {typeof children === 'string' ? <AppText variant="caption">{children}</AppText> : children}

@@ -1,6 +1,6 @@
 import type { ComponentProps } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon, type IconName } from '@/components/ui/icon';
 import { fonts, fontSizes, radii, spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
@@ -13,7 +13,7 @@ export interface ButtonProps {
   testID: string;
   accessibilityLabel?: string;
   variant?: ButtonVariant;
-  icon?: ComponentProps<typeof Ionicons>['name'];
+  icon?: IconName;
   loading?: boolean;
   disabled?: boolean;
   fullWidth?: boolean;
@@ -38,7 +38,8 @@ export function Button({
       testID={testID}
       accessibilityRole="button"
       accessibilityLabel={accessibilityLabel ?? label}
-      accessibilityState={{ disabled: inactive, busy: loading }}
+      aria-disabled={inactive}
+      aria-busy={loading}
       disabled={inactive}
       onPress={onPress}
       style={({ pressed }) => [
@@ -58,7 +59,7 @@ export function Button({
         {loading ? (
           <ActivityIndicator size="small" color={fg} />
         ) : icon ? (
-          <Ionicons name={icon} size={18} color={fg} accessibilityElementsHidden importantForAccessibility="no" />
+          <Icon name={icon} size={18} color={fg} />
         ) : null}
         <AppText style={[styles.label, { color: fg }]}>{label}</AppText>
       </View>

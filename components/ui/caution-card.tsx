@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { radii, spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
@@ -25,11 +25,11 @@ export function CautionCard({ audience }: CautionCardProps) {
   return (
     <View
       testID="caution-card"
-      accessibilityRole="summary"
+      role="note"
       style={[styles.box, { backgroundColor: colors.warningSurface, borderColor: colors.warning }]}
     >
       <View style={styles.titleRow}>
-        <Ionicons name="hand-left-outline" size={18} color={colors.warning} />
+        <Icon name="hand-left-outline" size={18} color={colors.warning} />
         <AppText variant="bodyStrong">Play safely</AppText>
       </View>
       {lines.map((line) => (

@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { radii, spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
@@ -36,11 +36,11 @@ export function ChoiceChips<V extends string | number>({ label, options, selecte
               testID={option.testID}
               accessibilityRole={multiple ? 'checkbox' : 'radio'}
               accessibilityLabel={option.label}
-              accessibilityState={{ checked: on }}
+              aria-checked={on}
               onPress={() => onToggle(option.value)}
               style={[styles.chip, { borderColor: on ? colors.primary : colors.borderStrong, backgroundColor: on ? colors.primary : colors.surface }]}
             >
-              {on ? <Ionicons name="checkmark" size={16} color={colors.onPrimary} /> : null}
+              {on ? <Icon name="checkmark" size={16} color={colors.onPrimary} /> : null}
               <AppText variant="label" style={{ color: on ? colors.onPrimary : colors.text }}>
                 {option.label}
               </AppText>

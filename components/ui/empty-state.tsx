@@ -1,12 +1,12 @@
 import type { ComponentProps } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon, type IconName } from '@/components/ui/icon';
 import { radii, spacing } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
 
 export interface EmptyStateProps {
-  icon: ComponentProps<typeof Ionicons>['name'];
+  icon: IconName;
   title: string;
   children: string;
   testID?: string;
@@ -17,7 +17,7 @@ export function EmptyState({ icon, title, children, testID }: EmptyStateProps) {
   const { colors } = useTheme();
   return (
     <View testID={testID} style={[styles.box, { borderColor: colors.border }]}>
-      <Ionicons name={icon} size={28} color={colors.accent} />
+      <Icon name={icon} size={28} color={colors.accent} />
       <AppText variant="heading">{title}</AppText>
       <AppText tone="muted" style={styles.text}>
         {children}

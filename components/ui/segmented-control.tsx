@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { radii, spacing, touchTarget } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
@@ -32,11 +32,11 @@ export function SegmentedControl<V extends string>({ label, options, value, onCh
               testID={option.testID}
               accessibilityRole="radio"
               accessibilityLabel={option.label}
-              accessibilityState={{ checked: selected }}
+              aria-checked={selected}
               onPress={() => onChange(option.value)}
               style={[styles.segment, { backgroundColor: selected ? colors.primary : colors.surface }]}
             >
-              {selected ? <Ionicons name="checkmark" size={16} color={colors.onPrimary} /> : null}
+              {selected ? <Icon name="checkmark" size={16} color={colors.onPrimary} /> : null}
               <AppText variant="label" style={{ color: selected ? colors.onPrimary : colors.text }}>
                 {option.label}
               </AppText>

@@ -1,6 +1,6 @@
 import type { ComponentProps } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon, type IconName } from '@/components/ui/icon';
 import { radii, spacing, type ColorTokens } from '@/constants/theme';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
@@ -17,7 +17,7 @@ const look: Record<BadgeTone, { fg: keyof ColorTokens; bg: keyof ColorTokens }> 
 export interface StatusBadgeProps {
   label: string;
   tone: BadgeTone;
-  icon: ComponentProps<typeof Ionicons>['name'];
+  icon: IconName;
   testID?: string;
 }
 
@@ -27,7 +27,7 @@ export function StatusBadge({ label, tone, icon, testID }: StatusBadgeProps) {
   const { fg, bg } = look[tone];
   return (
     <View testID={testID} style={[styles.badge, { backgroundColor: colors[bg] }]}>
-      <Ionicons name={icon} size={14} color={colors[fg]} />
+      <Icon name={icon} size={14} color={colors[fg]} />
       <AppText variant="label" style={{ color: colors[fg] }}>
         {label}
       </AppText>

@@ -1,8 +1,9 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
-import Ionicons from '@expo/vector-icons/Ionicons';
+import { Icon } from '@/components/ui/icon';
 import { useController, type Control, type FieldPath, type FieldValues } from 'react-hook-form';
 import { fonts, fontSizes, radii, spacing, touchTarget } from '@/constants/theme';
+import { useTakenOver } from '@/hooks/use-taken-over';
 import { useTheme } from '@/hooks/use-theme';
 import { AppText } from './text';
 
@@ -34,6 +35,9 @@ export function TextField<T extends FieldValues, O = T>({
   const { field, fieldState } = useController<T, FieldPath<T>, O>({ control, name });
   const [focused, setFocused] = useState(false);
   const [revealed, setRevealed] = useState(false);
+  // A pre-rendered page shows its fields before the app runs; React empties them when it takes the page
+  // over, so what was typed before then would vanish. They take typing from that moment on.
+  const takenOver = useTakenOver();
   const error = fieldState.error?.message;
   const value = typeof field.value === 'string' ? field.value : '';
   const borderColor = error ? colors.danger : focused ? colors.focus : colors.borderStrong;
@@ -56,6 +60,7 @@ export function TextField<T extends FieldValues, O = T>({
           accessibilityHint={error}
           aria-invalid={error ? true : undefined}
           value={value}
+          editable={takenOver}
           onChangeText={field.onChange}
           onBlur={() => {
             setFocused(false);
@@ -75,13 +80,13 @@ export function TextField<T extends FieldValues, O = T>({
             onPress={() => setRevealed((now) => !now)}
             style={styles.reveal}
           >
-            <Ionicons name={revealed ? 'eye-off-outline' : 'eye-outline'} size={20} color={colors.textMuted} />
+            <Icon name={revealed ? 'eye-off-outline' : 'eye-outline'} size={20} color={colors.textMuted} />
           </Pressable>
         ) : null}
       </View>
       {error ? (
         <View style={styles.errorRow} accessibilityLiveRegion="polite">
-          <Ionicons name="alert-circle" size={16} color={colors.danger} />
+          <Icon name="alert-circle" size={16} color={colors.danger} />
           <AppText variant="caption" tone="danger" testID={`${testID}-error`} style={styles.errorText}>
             {error}
           </AppText>
