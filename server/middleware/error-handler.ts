@@ -12,8 +12,15 @@ function isSqliteConstraint(error: unknown): error is Error & { code: string } {
   return error instanceof Error && 'code' in error && String(error.code).startsWith('SQLITE_CONSTRAINT');
 }
 
+function clientErrorStatus(error: unknown): number | undefined {
+  if (typeof error !== 'object' || !error || !('status' in error)) return undefined;
+  const { status } = error;
+  return typeof status === 'number' && status >= 400 && status < 500 ? status : undefined;
+}
+
 /** The one JSON error handler, registered last. */
 export const errorHandler: ErrorRequestHandler = (error, _req, res, _next) => {
+  const clientStatus = clientErrorStatus(error);
   let status = 500;
   let body: ApiErrorBody = { error: { code: 'internal', message: 'Something went wrong on our side.' } };
   if (error instanceof HttpError) {
@@ -37,6 +44,14 @@ export const errorHandler: ErrorRequestHandler = (error, _req, res, _next) => {
   } else if (typeof error === 'object' && error && 'status' in error && error.status === 413) {
     status = 413;
     body = { error: { code: 'too_large', message: 'The request is too large.' } };
+  } else if (error instanceof URIError) {
+    // Express could not decode a percent-escape in the path (`/musicians/%E0%A4%A`).
+    status = 400;
+    body = { error: { code: 'malformed_url', message: 'The address is not valid: a %-escape in it cannot be read.' } };
+  } else if (clientStatus) {
+    // Express and its body parsers mark what was wrong with the request itself (http-errors' `status`).
+    status = clientStatus;
+    body = { error: { code: 'bad_request', message: 'The request could not be read.' } };
   } else {
     console.error('[error]', error);
   }

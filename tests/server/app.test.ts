@@ -4,7 +4,8 @@ import path from 'node:path';
 import request from 'supertest';
 import { createApp } from '@/server/app';
 import { memoryStorage } from '@/server/lib/storage';
-import { createTestContext } from './support/test-app';
+import { musicianWithPlan } from './support/plan-fixture';
+import { createTestContext, signedInAgent } from './support/test-app';
 
 describe('the server shell', () => {
   it('answers unknown API routes with a JSON 404', async () => {
@@ -19,6 +20,19 @@ describe('the server shell', () => {
     const response = await request(app).post('/api/invitations/by-token/aaaaaaaaaaaaaaaaaaaa/accept').set('content-type', 'application/json').send('{"password":');
     expect(response.status).toBe(400);
     expect(response.body.error.code).toBe('malformed_json');
+  });
+
+  it('answers an address with a broken %-escape with 400, not 500, on pages and signed-in API routes', async () => {
+    const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ritorno-web-'));
+    fs.writeFileSync(path.join(webDir, 'index.html'), '<!doctype html><title>Ritorno</title>');
+    const base = createTestContext();
+    const app = createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), storage: memoryStorage(), webDir });
+    const pia = await musicianWithPlan(base, { startDate: '2027-02-22' });
+    const clinician = await signedInAgent(base, pia.clinicianEmail);
+    for (const response of [await request(app).get('/musicians/%E0%A4%A'), await clinician.get('/api/musicians/%E0%A4%A')]) {
+      expect(response.status).toBe(400);
+      expect(response.body.error.code).toBe('malformed_url');
+    }
   });
 
   it('sends security headers', async () => {
