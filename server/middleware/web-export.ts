@@ -20,6 +20,13 @@ const SIGNED_IN_CHUNK = /^signed-in-screens-[0-9a-f]+\.js$/;
 const SESSION_COOKIE = /(?:^|;\s*)(?:__Secure-)?better-auth\.session_token=/;
 const SCRIPTS = '_expo/static/js/web';
 
+// What the app asks the API for first, fetched while the page and its scripts download instead of after
+// the app has started: the session and the account on every page, and the day itself on the musician's
+// Today (/home). The links must match the app's own requests (same URL, credentials included) to be used.
+const ACCOUNT_READS = ['/api/auth/get-session', '/api/me'];
+const FIRST_READS: Record<string, string[]> = { home: ['/api/today', '/api/me/musician'] };
+const fetchPreload = (href: string) => `<link rel="preload" as="fetch" href="${href}" crossorigin="use-credentials" />`;
+
 interface Page {
   /** Path segments; `null` stands for a dynamic segment such as `[id]`. */
   segments: (string | null)[];
@@ -64,8 +71,11 @@ function signedInChunk(root: string): string | undefined {
 
 function page(root: string, file: string, chunk: string | undefined): Page {
   const plain = fs.readFileSync(path.join(root, file), 'utf8');
-  const preload = chunk ? `<link rel="preload" as="script" href="/${SCRIPTS}/${chunk}" />` : '';
   const route = file.replace(/\.html$/, '').split('/').filter((segment, index, all) => !(segment === 'index' && index === all.length - 1));
+  const preload = [
+    chunk ? `<link rel="preload" as="script" href="/${SCRIPTS}/${chunk}" />` : '',
+    ...[...ACCOUNT_READS, ...(FIRST_READS[route.join('/')] ?? [])].map(fetchPreload),
+  ].join('');
   return {
     segments: route.map((segment) => (/^\[[^\]]+\]$/.test(segment) ? null : segment)),
     plain,

@@ -7,6 +7,8 @@ import { createApp } from '@/server/app';
 import { memoryStorage } from '@/server/lib/storage';
 import { createTestContext } from './support/test-app';
 
+const escape = (text: string) => text.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
+
 const INDEX = '<!doctype html><html><head><title>Ritorno</title></head><body><script src="/_expo/static/js/web/entry-abc123.js" defer></script></body></html>';
 
 function appWithExport({ signedInChunk = true } = {}) {
@@ -60,7 +62,7 @@ describe('the web export', () => {
     for (const cookie of ['better-auth.session_token=abc.def', 'theme=dark; __Secure-better-auth.session_token=abc.def']) {
       const response = await request(app).get('/home').set('Cookie', cookie);
       expect(response.status).toBe(200);
-      expect(response.text).toContain(`${preload}</head>`);
+      expect(response.text).toMatch(new RegExp(`${escape(preload)}(<link [^>]+>)*</head>`));
       expect(response.text).toContain('entry-abc123.js');
       expect(response.headers.vary).toMatch(/Cookie/);
       expect(response.headers['cache-control']).toBe('no-cache');
@@ -77,10 +79,11 @@ describe('the web export', () => {
     }
   });
 
-  it('does send index.html unchanged to a signed-in visitor when the export has no signed-in chunk', async () => {
+  it('does preload no script for a signed-in visitor when the export has no signed-in chunk, only the account reads', async () => {
     const app = appWithExport({ signedInChunk: false });
     const response = await request(app).get('/home').set('Cookie', 'better-auth.session_token=abc.def');
-    expect(response.text).toBe(INDEX);
+    expect(response.text).not.toContain('as="script"');
+    expect(response.text.replace(/<link rel="preload" as="fetch" href="[^"]+" crossorigin="use-credentials" \/>/g, '')).toBe(INDEX);
   });
 
   function appWithStaticExport() {
@@ -127,10 +130,19 @@ describe('the web export', () => {
   it('does preload the signed-in chunk on a pre-rendered page when the visitor holds a session cookie', async () => {
     const app = appWithStaticExport();
     const signedIn = await request(app).get('/musicians/m-42').set('Cookie', 'better-auth.session_token=abc.def');
-    expect(signedIn.text).toContain(`${preload}</head>`);
+    expect(signedIn.text).toMatch(new RegExp(`${escape(preload)}(<link [^>]+>)*</head>`));
     expect(signedIn.text).toContain('<title>musicians/[id].html</title>');
     const signedOut = await request(app).get('/musicians/m-42');
     expect(signedOut.text).not.toContain('rel="preload"');
+  });
+
+  it("does start a signed-in visitor's first API reads with the page: the account everywhere, the day on Today", async () => {
+    const app = appWithStaticExport();
+    const fetched = (html: string) => [...html.matchAll(/<link rel="preload" as="fetch" href="([^"]+)" crossorigin="use-credentials" \/>/g)].map((m) => m[1]);
+    const cookie = 'better-auth.session_token=abc.def';
+    expect(fetched((await request(app).get('/home').set('Cookie', cookie)).text)).toEqual(['/api/auth/get-session', '/api/me', '/api/today', '/api/me/musician']);
+    expect(fetched((await request(app).get('/musicians/m-42').set('Cookie', cookie)).text)).toEqual(['/api/auth/get-session', '/api/me']);
+    expect(fetched((await request(app).get('/home')).text)).toEqual([]);
   });
 
   it('does allow a page its own inline script by hash in the Content-Security-Policy, and no other inline script', async () => {
