@@ -6,6 +6,7 @@ import { openServerPath } from '@/lib/open-url';
 import type { DocumentRecord } from '@/shared/schemas/document';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { ConfirmDelete } from '@/components/ui/confirm-delete';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { AppText } from '@/components/ui/text';
 
@@ -33,7 +34,16 @@ export function DocumentRow({ id, document }: { id: string; document: DocumentRe
           onPress={() => update.mutate({ docId: document.id, body: { visibility: shared ? 'private' : 'shared' } })}
           loading={update.isPending}
         />
-        <Button testID={`document-delete-${document.id}`} variant="ghost" icon="trash-outline" label="Delete" accessibilityLabel={`Delete ${document.title}`} onPress={() => remove.mutate(document.id)} loading={remove.isPending} />
+        <ConfirmDelete
+          testID={`document-delete-${document.id}`}
+          label="Delete"
+          accessibilityLabel={`Delete ${document.title}`}
+          question={`Delete ‘${document.title}’ from this record?`}
+          detail={shared ? 'The file is removed for good, and the musician can no longer open it.' : 'The file is removed for good.'}
+          busy={remove.isPending}
+          error={remove.isError ? remove.error.message : null}
+          onConfirm={() => remove.mutate(document.id)}
+        />
       </View>
     </Card>
   );

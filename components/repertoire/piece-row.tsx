@@ -4,6 +4,7 @@ import { demandsInWords, tierWords } from '@/lib/repertoire-words';
 import type { PieceRecord } from '@/shared/schemas/repertoire';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { ConfirmDelete } from '@/components/ui/confirm-delete';
 import { AppText } from '@/components/ui/text';
 import { ClearanceBadge } from './clearance-badge';
 
@@ -12,9 +13,10 @@ export interface PieceRowProps {
   onEdit: () => void;
   onDelete: () => void;
   deleting: boolean;
+  deleteError?: string | null;
 }
 
-export function PieceRow({ piece, onEdit, onDelete, deleting }: PieceRowProps) {
+export function PieceRow({ piece, onEdit, onDelete, deleting, deleteError }: PieceRowProps) {
   return (
     <Card testID="piece-row">
       <View style={styles.head}>
@@ -31,7 +33,16 @@ export function PieceRow({ piece, onEdit, onDelete, deleting }: PieceRowProps) {
       ))}
       <View style={styles.actions}>
         <Button testID={`piece-edit-${piece.id}`} variant="secondary" icon="create-outline" label="Edit" accessibilityLabel={`Edit ${piece.title}`} onPress={onEdit} />
-        <Button testID={`piece-delete-${piece.id}`} variant="ghost" icon="trash-outline" label="Remove" accessibilityLabel={`Remove ${piece.title}`} onPress={onDelete} loading={deleting} />
+        <ConfirmDelete
+          testID={`piece-delete-${piece.id}`}
+          label="Remove"
+          accessibilityLabel={`Remove ${piece.title}`}
+          question={`Remove ‘${piece.title}’ from the repertoire?`}
+          detail="Its tier and demanding passages go with it; the plan itself is not changed."
+          busy={deleting}
+          error={deleteError}
+          onConfirm={onDelete}
+        />
       </View>
     </Card>
   );

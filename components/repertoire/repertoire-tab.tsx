@@ -31,7 +31,14 @@ export function RepertoireTab({ id }: { id: string }) {
       {pieces.data?.length === 0 ? <AppText tone="muted">No pieces yet.</AppText> : null}
       <View style={styles.list}>
         {pieces.data?.map((piece) => (
-          <PieceRow key={piece.id} piece={piece} onEdit={() => setEditing(piece)} onDelete={() => remove.mutate(piece.id)} deleting={remove.isPending && remove.variables === piece.id} />
+          <PieceRow
+            key={piece.id}
+            piece={piece}
+            onEdit={() => setEditing(piece)}
+            onDelete={() => remove.mutate(piece.id)}
+            deleting={remove.isPending && remove.variables === piece.id}
+            deleteError={remove.isError && remove.variables === piece.id ? remove.error.message : null}
+          />
         ))}
       </View>
     </Section>

@@ -4,8 +4,8 @@ import { spacing, touchTarget } from '@/constants/theme';
 import { useDeleteSetupItemMutation, useUpdateSetupItemMutation } from '@/hooks/use-setup';
 import { useTheme } from '@/hooks/use-theme';
 import type { SetupItem } from '@/shared/schemas/setup';
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { ConfirmDelete } from '@/components/ui/confirm-delete';
 import { AppText } from '@/components/ui/text';
 import { setupKindWords } from './setup-words';
 
@@ -32,7 +32,16 @@ export function SetupItemRow({ id, item }: { id: string; item: SetupItem }) {
         </View>
       </Pressable>
       {item.instructions ? <AppText variant="caption">{item.instructions}</AppText> : null}
-      <Button testID={`setup-delete-${item.id}`} variant="ghost" icon="trash-outline" label="Remove" accessibilityLabel={`Remove ${item.label}`} onPress={() => remove.mutate(item.id)} loading={remove.isPending} />
+      <ConfirmDelete
+        testID={`setup-delete-${item.id}`}
+        label="Remove"
+        accessibilityLabel={`Remove ${item.label}`}
+        question={`Remove ‘${item.label}’ from the setup?`}
+        detail="The musician stops being reminded of it."
+        busy={remove.isPending}
+        error={remove.isError ? remove.error.message : null}
+        onConfirm={() => remove.mutate(item.id)}
+      />
     </Card>
   );
 }

@@ -1,4 +1,4 @@
-import type { ComponentProps } from 'react';
+import type { Ref } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
 import { Icon, type IconName } from '@/components/ui/icon';
 import { fonts, fontSizes, radii, spacing, touchTarget } from '@/constants/theme';
@@ -17,6 +17,8 @@ export interface ButtonProps {
   loading?: boolean;
   disabled?: boolean;
   fullWidth?: boolean;
+  /** For moving focus to the button (after a confirmation opens or closes). */
+  ref?: Ref<View>;
 }
 
 export function Button({
@@ -29,12 +31,14 @@ export function Button({
   loading = false,
   disabled = false,
   fullWidth = false,
+  ref,
 }: ButtonProps) {
   const { colors } = useTheme();
   const inactive = disabled || loading;
   const fg = variant === 'primary' ? colors.onPrimary : colors.primary;
   return (
     <Pressable
+      ref={ref}
       testID={testID}
       accessibilityRole="button"
       accessibilityLabel={accessibilityLabel ?? label}
