@@ -67,7 +67,8 @@ export function currentStep(state: SessionState): SessionStep | undefined {
   return state.steps[state.index];
 }
 
-function elapsedAt(state: SessionState, at: number): number {
+/** Session time spent so far in the current timed step, at real time `at`. */
+export function elapsedAt(state: SessionState, at: number): number {
   return state.elapsedMs + (state.runningSince === null ? 0 : Math.max(0, at - state.runningSince) * state.speed);
 }
 

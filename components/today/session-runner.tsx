@@ -8,6 +8,7 @@ import type { DaySession, Today } from '@/shared/schemas/today';
 import { Button } from '@/components/ui/button';
 import { AppText } from '@/components/ui/text';
 import { GateStep } from './gate-step';
+import { ResumeNotice } from './resume-notice';
 import { minutesPlayed, remainingMs, type SessionState } from './session-machine';
 import { SessionDone } from './session-done';
 import { StopOutcome } from './stop-outcome';
@@ -22,6 +23,14 @@ export interface SessionRunnerProps {
   speed?: number;
   now?: () => number;
   onClose: () => void;
+  /** A place kept on the device from an earlier visit today: the runner starts there, paused. */
+  restored?: SessionState | null;
+  /** Called as the session moves (to keep its place) until its check-in is queued. */
+  onProgress?: (state: SessionState, at: number) => void;
+  /** Called once the session's check-in is queued: the kept place is no longer needed. */
+  onSent?: () => void;
+  /** Discards the kept place and runs the session from its first check. */
+  onStartOver?: () => void;
 }
 
 function checkInOf(today: Today, session: DaySession, state: SessionState, minutes: number, effort?: number) {
@@ -37,25 +46,35 @@ function checkInOf(today: Today, session: DaySession, state: SessionState, minut
 }
 
 /** A session, full screen: gates, the timer through blocks and rests, and the check-in at the end. */
-export function SessionRunner({ today, session, speed = 1, now, onClose }: SessionRunnerProps) {
+export function SessionRunner({ today, session, speed = 1, now, onClose, restored, onProgress, onSent, onStartOver }: SessionRunnerProps) {
   const { colors } = useTheme();
-  const { state, step, at, actions } = useSessionRun(session, { threshold: today.painThreshold.session, speed, now });
+  const { state, step, at, actions } = useSessionRun(session, { threshold: today.painThreshold.session, speed, now, initial: restored });
   const { submit, outcome } = useCheckInQueue();
   const [clientKey, setClientKey] = useState<string | null>(null);
   const [leaving, setLeaving] = useState(false);
   const sent = useRef(false);
+  const progress = useRef({ onProgress, onSent });
+  progress.current = { onProgress, onSent };
+
+  const send = (checkIn: ReturnType<typeof checkInOf>) => {
+    sent.current = true;
+    setClientKey(submit(checkIn));
+    progress.current.onSent?.();
+  };
 
   // A gate over the threshold or a red flag ends the session at once: the check-in goes straight away.
   useEffect(() => {
     if (state.status !== 'stopped' || sent.current) return;
-    sent.current = true;
-    setClientKey(submit(checkInOf(today, session, state, minutesPlayed(state, at))));
-  }, [state, today, session, at, submit]);
+    send(checkInOf(today, session, state, minutesPlayed(state, at)));
+  });
+
+  useEffect(() => {
+    if (!sent.current) progress.current.onProgress?.(state, at);
+  }, [state, at]);
 
   const saveWrapUp = (effort: number, minutes: number) => {
     if (sent.current) return;
-    sent.current = true;
-    setClientKey(submit(checkInOf(today, session, state, minutes, effort)));
+    send(checkInOf(today, session, state, minutes, effort));
   };
   const inProgress = clientKey === null;
   const blocks = session.items.filter((item) => item.kind === 'gate' && item.gate?.position !== 'before').length;
@@ -102,9 +121,11 @@ export function SessionRunner({ today, session, speed = 1, now, onClose }: Sessi
               <Button testID="session-leave" label="Leave" icon="close" variant="ghost" onPress={() => (state.gates.length > 0 ? setLeaving(true) : onClose())} />
             ) : null}
           </View>
+          {restored && inProgress && onStartOver ? <ResumeNotice restored={restored} onStartOver={onStartOver} /> : null}
           {leaving ? (
             <View style={[styles.confirm, { borderColor: colors.warning, backgroundColor: colors.warningSurface }]} testID="leave-confirm">
-              <AppText variant="bodyStrong">Leave without saving this session?</AppText>
+              <AppText variant="bodyStrong">Leave this session for now?</AppText>
+              <AppText variant="caption">{onProgress ? 'Your place is kept on this device until the end of today; nothing is sent until you finish.' : 'Nothing is sent until you finish.'}</AppText>
               <View style={styles.row}>
                 <Button testID="leave-confirm-yes" label="Leave" variant="secondary" onPress={onClose} />
                 <Button testID="leave-confirm-no" label="Stay" onPress={() => setLeaving(false)} />

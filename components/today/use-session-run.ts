@@ -2,7 +2,7 @@ import { useEffect, useReducer, useRef, useState } from 'react';
 import { playCue } from '@/lib/session-cues';
 import type { DaySession } from '@/shared/schemas/today';
 import type { RedFlag } from '@/shared/schemas/check-in';
-import { currentStep, sessionReducer, startSession } from './session-machine';
+import { currentStep, sessionReducer, startSession, type SessionState } from './session-machine';
 
 export interface SessionRunOptions {
   threshold: number;
@@ -10,11 +10,13 @@ export interface SessionRunOptions {
   /** The clock, injectable for tests. */
   now?: () => number;
   tickMs?: number;
+  /** A saved place to run from instead of the session's start (restored paused). */
+  initial?: SessionState | null;
 }
 
 /** Runs the session machine against a clock: ticks while a timed step runs, and cues each change. */
-export function useSessionRun(session: DaySession, { threshold, speed, now = Date.now, tickMs = 250 }: SessionRunOptions) {
-  const [state, dispatch] = useReducer(sessionReducer, session, (s) => startSession(s, { threshold, speed }));
+export function useSessionRun(session: DaySession, { threshold, speed, now = Date.now, tickMs = 250, initial }: SessionRunOptions) {
+  const [state, dispatch] = useReducer(sessionReducer, session, (s) => initial ?? startSession(s, { threshold, speed }));
   const [at, setAt] = useState(() => now());
   const step = currentStep(state);
   const ticking = step?.kind === 'timed' && state.status === 'running';
