@@ -28,6 +28,8 @@ try {
     accessibility: Math.round((lhr?.categories.accessibility?.score ?? 0) * 100),
     finalUrl: lhr?.finalDisplayedUrl,
     failing,
+    lcpMs: Math.round(lhr?.audits['largest-contentful-paint']?.numericValue ?? 0),
+    tbtMs: Math.round(lhr?.audits['total-blocking-time']?.numericValue ?? 0),
   }));
 } finally {
   await chrome.kill();

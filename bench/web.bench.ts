@@ -11,6 +11,8 @@ const ROOT = path.resolve(__dirname, '..');
 export const WORK = '/tmp/ritorno-bench';
 export const WEB_DIR = path.join(WORK, 'web');
 const MINIMAL = path.join(WORK, 'minimal');
+/** The minimal app's export, built by the bundle bench (and served to Lighthouse as its baseline). */
+export const MINIMAL_DIST = path.join(MINIMAL, 'dist');
 
 const EXPORT_ENV = { ...process.env, EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1', CI: '1' };
 
@@ -28,7 +30,7 @@ function exportMinimal(): string {
   fs.writeFileSync(path.join(MINIMAL, 'package.json'), JSON.stringify({ name: 'minimal-router-app', private: true, main: 'expo-router/entry' }));
   fs.writeFileSync(path.join(MINIMAL, 'app.json'), JSON.stringify({ expo: { name: 'minimal', slug: 'minimal', web: { bundler: 'metro', output: 'single' }, plugins: ['expo-router'] } }));
   fs.writeFileSync(path.join(MINIMAL, 'app', 'index.tsx'), "import { Text } from 'react-native';\nexport default function Index() {\n  return <Text>Hello</Text>;\n}\n");
-  const out = path.join(MINIMAL, 'dist');
+  const out = MINIMAL_DIST;
   execFileSync(path.join(ROOT, 'node_modules/.bin/expo'), ['export', '--platform', 'web', '--output-dir', out], { cwd: MINIMAL, env: EXPORT_ENV, stdio: 'pipe', timeout: 300_000 });
   return out;
 }
