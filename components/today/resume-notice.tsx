@@ -14,7 +14,7 @@ export interface ResumeNoticeProps {
 function whereWords(state: SessionState): string {
   const step = currentStep(state);
   const gates = state.gates.length;
-  const answered = gates > 0 ? ` Your ${gates === 1 ? 'first check is' : `${gates} checks are`} kept.` : '';
+  const answered = gates > 0 ? ` ${gates === 1 ? 'Your answer at the first pain check is' : `Your answers at ${gates} pain checks are`} kept.` : '';
   if (state.status === 'finished' || !step) return `Every block is done: say how it went to send it.${answered}`;
   if (step.kind === 'gate') return `You were at a pain check.${answered}`;
   return `${stepTitle(step)} is paused with ${clockText(remainingMs(state, 0))} to go: press Resume when you are ready.${answered}`;

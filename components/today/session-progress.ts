@@ -73,9 +73,12 @@ function writeAll(store: KeyValueStore, entries: SavedProgress[]): void {
 
 const plannedOf = (session: DaySession) => JSON.stringify(stepsOf(session));
 
-/** What to keep of `state` at real time `at`; null once the session has stopped (its check-in is due). */
+/**
+ * What to keep of `state` at real time `at`; null before the first check is answered (nothing to come
+ * back to) and once the session has stopped (its check-in is due).
+ */
 export function snapshotOf(key: ProgressKey, session: DaySession, state: SessionState, at: number): SavedProgress | null {
-  if (state.status === 'stopped') return null;
+  if (state.status === 'stopped' || state.gates.length === 0) return null;
   const finished = state.status === 'finished';
   return {
     ...key,

@@ -77,6 +77,8 @@ export function SessionRunner({ today, session, speed = 1, now, onClose, restore
     send(checkInOf(today, session, state, minutes, effort));
   };
   const inProgress = clientKey === null;
+  // The notice describes the place as it came back: once the musician resumes or answers, it is stale.
+  const justRestored = restored && state.index === restored.index && state.status === restored.status;
   const blocks = session.items.filter((item) => item.kind === 'gate' && item.gate?.position !== 'before').length;
 
   let body;
@@ -121,7 +123,7 @@ export function SessionRunner({ today, session, speed = 1, now, onClose, restore
               <Button testID="session-leave" label="Leave" icon="close" variant="ghost" onPress={() => (state.gates.length > 0 ? setLeaving(true) : onClose())} />
             ) : null}
           </View>
-          {restored && inProgress && onStartOver ? <ResumeNotice restored={restored} onStartOver={onStartOver} /> : null}
+          {justRestored && inProgress && onStartOver ? <ResumeNotice restored={restored} onStartOver={onStartOver} /> : null}
           {leaving ? (
             <View style={[styles.confirm, { borderColor: colors.warning, backgroundColor: colors.warningSurface }]} testID="leave-confirm">
               <AppText variant="bodyStrong">Leave this session for now?</AppText>

@@ -75,8 +75,9 @@ describe('session progress kept on the device', () => {
     expect(restoreProgress(store, key, longer, options)).toBeNull();
   });
 
-  it('keeps nothing once the session has stopped, and clearing removes only that session', () => {
+  it('keeps nothing before the first check or once the session has stopped, and clearing removes only that session', () => {
     const store = memoryStore();
+    expect(snapshotOf(key, shortSession, startSession(shortSession, options), 0)).toBeNull();
     const stopped = sessionReducer(startSession(shortSession, options), { type: 'answer_gate', pain: 0, redFlags: ['numbness'], at: 0 });
     expect(stopped.status).toBe('stopped');
     expect(snapshotOf(key, shortSession, stopped, 0)).toBeNull();

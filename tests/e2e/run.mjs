@@ -7,9 +7,10 @@ import { scenarios as roleScenarios } from './scenarios.mjs';
 import { musicianScenarios } from './musician.scenarios.mjs';
 import { teacherScenarios } from './teacher.scenarios.mjs';
 import { clinicianScenarios } from './clinician.scenarios.mjs';
+import { safetyScenarios } from './safety.scenarios.mjs';
 
 // The clinician's run last: it activates a new plan version for a musician other scenarios read.
-const scenarios = [...roleScenarios, ...teacherScenarios, ...musicianScenarios, ...clinicianScenarios];
+const scenarios = [...roleScenarios, ...teacherScenarios, ...musicianScenarios, ...safetyScenarios, ...clinicianScenarios];
 
 const require = createRequire(path.join(process.cwd(), 'package.json'));
 const { chromium } = require('playwright-core');
