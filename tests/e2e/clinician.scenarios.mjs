@@ -71,6 +71,26 @@ export const clinicianScenarios = [
     },
   },
   {
+    name: 'a clinician asked to confirm removing a piece can back out with Escape, and the piece stays',
+    run: async ({ page, baseUrl }) => {
+      await openRecord(page, baseUrl, 'Caio Brandt');
+      await page.getByTestId('record-tab-repertoire').click();
+      const row = page.getByTestId('piece-row').filter({ hasText: 'Pastorale in G' });
+      const remove = row.locator('[data-testid^="piece-delete-"]').first();
+      await remove.waitFor({ state: 'visible', timeout: TIMEOUT });
+      const id = await remove.getAttribute('data-testid');
+      await remove.click();
+      const dialog = page.getByRole('alertdialog', { name: 'Remove ‘Pastorale in G’ from the repertoire?' });
+      await dialog.waitFor({ state: 'visible', timeout: TIMEOUT });
+      const focused = () => page.evaluate(() => document.activeElement?.getAttribute('data-testid'));
+      if ((await focused()) !== `${id}-no`) throw new Error(`focus is not on Cancel when the confirmation opens: ${await focused()}`);
+      await page.keyboard.press('Escape');
+      await dialog.waitFor({ state: 'detached', timeout: TIMEOUT });
+      if ((await focused()) !== id) throw new Error(`focus did not return to the Remove button: ${await focused()}`);
+      await row.first().waitFor({ state: 'visible', timeout: TIMEOUT });
+    },
+  },
+  {
     name: 'a clinician reads the check-ins, the chart and the load of a musician held after pain',
     run: async ({ page, baseUrl, size }) => {
       await openRecord(page, baseUrl, 'Caio Brandt');
