@@ -13,6 +13,8 @@ export interface SessionCardProps {
   session: DaySession;
   /** Only the first session not yet done may start. */
   canStart: boolean;
+  /** A place in this session is kept on the device: the button continues it. */
+  resumable?: boolean;
   onStart: () => void;
   /** The plan's stop threshold at the gates, said in the pain checks. */
   painThreshold: number;
@@ -21,7 +23,7 @@ export interface SessionCardProps {
 const icons = { gate: 'shield-checkmark-outline', warm_up: 'sunny-outline', play: 'musical-notes-outline', burst: 'flash-outline', rest: 'cafe-outline', cool_down: 'leaf-outline' } as const;
 
 /** One of today's sessions as its blocks, rests and checks, with the way to start it. */
-export function SessionCard({ session, canStart, onStart, painThreshold }: SessionCardProps) {
+export function SessionCard({ session, canStart, resumable = false, onStart, painThreshold }: SessionCardProps) {
   const { colors } = useTheme();
   const label = `Session ${session.index + 1}`;
   return (
@@ -44,8 +46,8 @@ export function SessionCard({ session, canStart, onStart, painThreshold }: Sessi
       {!session.done ? (
         <Button
           testID={`session-start-${session.index}`}
-          label={canStart ? `Start ${label.toLowerCase()}` : 'After the session before'}
-          accessibilityLabel={`Start ${label}`}
+          label={canStart ? `${resumable ? 'Continue' : 'Start'} ${label.toLowerCase()}` : 'After the session before'}
+          accessibilityLabel={`${resumable ? 'Continue' : 'Start'} ${label}`}
           icon="play"
           fullWidth
           disabled={!canStart}

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { KeyValueStore } from '@/lib/local-store';
+import { deviceStore, type KeyValueStore } from '@/lib/local-store';
 import { GateAnswerSchema, GatePositionSchema, RedFlagSchema } from '@/shared/schemas/check-in';
 import { TierSchema } from '@/shared/schemas/piece';
 import type { DaySession } from '@/shared/schemas/today';
@@ -12,6 +12,10 @@ import { currentStep, elapsedAt, stepsOf, type SessionState } from './session-ma
  * once the session's check-in is queued or the day has moved on.
  */
 const STORE_KEY = 'ritorno.session-progress.v1';
+
+let deviceProgress: KeyValueStore | null = null;
+/** The device's storage, opened once (screens take another store in tests). */
+export const progressStore = (): KeyValueStore => (deviceProgress ??= deviceStore());
 
 export interface ProgressKey {
   musicianId: string;
@@ -103,6 +107,12 @@ export function clearProgress(store: KeyValueStore, key: ProgressKey): void {
   const entries = readAll(store);
   const kept = entries.filter((entry) => !sameKey(entry, key));
   if (kept.length !== entries.length) writeAll(store, kept);
+}
+
+/** Whether a place is kept for this session today (and the plan has not changed it since); reads only. */
+export function hasProgress(store: KeyValueStore, key: ProgressKey, session: DaySession): boolean {
+  const saved = readAll(store).find((entry) => sameKey(entry, key));
+  return saved !== undefined && saved.planned === plannedOf(session);
 }
 
 /**

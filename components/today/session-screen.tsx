@@ -3,13 +3,13 @@ import { useRouter } from 'expo-router';
 import type { DaySession, Today } from '@/shared/schemas/today';
 import { useMeQuery } from '@/hooks/use-me';
 import { useTodayQuery } from '@/hooks/use-today';
-import { deviceStore, type KeyValueStore } from '@/lib/local-store';
+import type { KeyValueStore } from '@/lib/local-store';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
 import { Button } from '@/components/ui/button';
 import type { SessionState } from './session-machine';
-import { clearProgress, restoreProgress, saveProgress, snapshotOf, type ProgressKey } from './session-progress';
+import { clearProgress, progressStore, restoreProgress, saveProgress, snapshotOf, type ProgressKey } from './session-progress';
 import { SessionRunner } from './session-runner';
 
 export interface SessionScreenProps {
@@ -20,9 +20,6 @@ export interface SessionScreenProps {
   /** The clock, injectable for tests. */
   now?: () => number;
 }
-
-let deviceProgressStore: KeyValueStore | null = null;
-const progressStore = () => (deviceProgressStore ??= deviceStore());
 
 interface Started {
   today: Today;

@@ -6,9 +6,11 @@ import { parseISO } from 'date-fns/parseISO';
 import { spacing } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import { useCheckInQueue } from '@/hooks/use-check-ins';
+import { useMeQuery } from '@/hooks/use-me';
 import { useMusicianHomeQuery } from '@/hooks/use-musician-home';
 import { useTodayQuery } from '@/hooks/use-today';
 import { isApiError } from '@/lib/api-client';
+import type { KeyValueStore } from '@/lib/local-store';
 import { Button } from '@/components/ui/button';
 import { CautionCard } from '@/components/ui/caution-card';
 import { ErrorState } from '@/components/ui/error-state';
@@ -23,14 +25,17 @@ import { DayStatus } from './day-status';
 import { MorningCheck } from './morning-check';
 import { PainReportSheet } from './pain-report-sheet';
 import { SessionCard } from './session-card';
+import { hasProgress, progressStore } from './session-progress';
 import { SetupReminders } from './setup-reminders';
 
 /** The musician's landing: the morning check first, then today's sessions, or why there are none. */
-export function TodayView({ speed = 1 }: { speed?: number }) {
+export function TodayView({ speed = 1, store = progressStore() }: { speed?: number; store?: KeyValueStore }) {
   const router = useRouter();
   const { isWide } = useBreakpoints();
   const today = useTodayQuery();
   const home = useMusicianHomeQuery();
+  // The kept place in a session is keyed by the account, as the session screen keeps it.
+  const me = useMeQuery();
   const { submit, outcome } = useCheckInQueue();
   const [reporting, setReporting] = useState(false);
   const [morningKey, setMorningKey] = useState<string | null>(null);
@@ -68,7 +73,7 @@ export function TodayView({ speed = 1 }: { speed?: number }) {
               <View style={[styles.grid, isWide && styles.gridWide]}>
                 <View style={[styles.main, isWide && styles.mainWide]}>
                   {data.sessions.map((session) => (
-                    <SessionCard key={session.index} session={session} canStart={firstOpen?.index === session.index} onStart={() => start(session.index)} painThreshold={data.painThreshold.session} />
+                    <SessionCard key={session.index} session={session} canStart={firstOpen?.index === session.index} resumable={me.data ? hasProgress(store, { musicianId: me.data.id, date: data.date, sessionIndex: session.index }, session) : false} onStart={() => start(session.index)} painThreshold={data.painThreshold.session} />
                   ))}
                 </View>
                 {data.sessions.length > 0 || data.setup.length > 0 ? (

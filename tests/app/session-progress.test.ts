@@ -1,5 +1,5 @@
 import { currentStep, remainingMs, sessionReducer, startSession, type SessionState } from '@/components/today/session-machine';
-import { clearProgress, restoreProgress, saveProgress, snapshotOf, type ProgressKey } from '@/components/today/session-progress';
+import { clearProgress, hasProgress, restoreProgress, saveProgress, snapshotOf, type ProgressKey } from '@/components/today/session-progress';
 import { memoryStore } from '@/lib/local-store';
 import type { DaySession } from '@/shared/schemas/today';
 import { shortSession } from './session-fixtures';
@@ -73,6 +73,19 @@ describe('session progress kept on the device', () => {
     saveProgress(store, snapshotOf(key, shortSession, thirtySecondsIntoBlockOne(), 90 * SEC)!);
     const longer: DaySession = { ...shortSession, items: shortSession.items.map((item) => (item.kind === 'play' ? { ...item, minutes: 3 } : item)) };
     expect(restoreProgress(store, key, longer, options)).toBeNull();
+  });
+
+  it('says a session can be continued only while its place is kept for that day and the plan is unchanged', () => {
+    const store = memoryStore();
+    expect(hasProgress(store, key, shortSession)).toBe(false);
+    saveProgress(store, snapshotOf(key, shortSession, thirtySecondsIntoBlockOne(), 90 * SEC)!);
+    expect(hasProgress(store, key, shortSession)).toBe(true);
+    expect(hasProgress(store, { ...key, sessionIndex: 1 }, shortSession)).toBe(false);
+    expect(hasProgress(store, { ...key, date: '2027-03-02' }, shortSession)).toBe(false);
+    const longer: DaySession = { ...shortSession, items: shortSession.items.map((item) => (item.kind === 'play' ? { ...item, minutes: 3 } : item)) };
+    expect(hasProgress(store, key, longer)).toBe(false);
+    clearProgress(store, key);
+    expect(hasProgress(store, key, shortSession)).toBe(false);
   });
 
   it('keeps nothing before the first check or once the session has stopped, and clearing removes only that session', () => {
