@@ -39,7 +39,8 @@ interface RequestOptions<S extends z.ZodType> {
   signal?: AbortSignal;
 }
 
-async function readJson(response: Response): Promise<unknown> {
+/** The body as JSON; null when it is empty or not JSON (a proxy's error page, a rate limit without body). */
+export async function readJson(response: Response): Promise<unknown> {
   const text = await response.text();
   if (!text) return null;
   try {

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ApiError, apiBaseUrl } from './api-client';
+import { ApiError, apiBaseUrl, readJson } from './api-client';
 
 /**
  * The few better-auth endpoints the app calls (the server keeps better-auth, server/auth.ts), spoken to
@@ -20,16 +20,6 @@ interface CallOptions {
   body?: unknown;
   signal?: AbortSignal;
   keepalive?: boolean;
-}
-
-async function readJson(response: Response): Promise<unknown> {
-  const text = await response.text();
-  if (!text) return null;
-  try {
-    return JSON.parse(text);
-  } catch {
-    return null;
-  }
 }
 
 /** One call to better-auth: a refusal becomes an ApiError carrying its code and message, or `fallback`. */
