@@ -6,9 +6,7 @@ import { FontDisplay, loadAsync, useFonts } from 'expo-font';
 import Head from 'expo-router/head';
 import * as SplashScreen from 'expo-splash-screen';
 import { StatusBar } from 'expo-status-bar';
-import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { fontFiles } from '@/constants/theme';
-import { useTakenOver } from '@/hooks/use-taken-over';
 import { useTheme } from '@/hooks/use-theme';
 import { queryClient } from '@/lib/query-client';
 
@@ -30,7 +28,6 @@ if (onWeb && typeof window !== 'undefined') {
 export default function RootLayout() {
   const [fontsLoaded, fontError] = useFonts(onWeb ? {} : fontFiles);
   const { scheme, colors } = useTheme();
-  const takenOver = useTakenOver();
 
   useEffect(() => {
     if (fontsLoaded || fontError) SplashScreen.hideAsync().catch(() => undefined);
@@ -38,9 +35,12 @@ export default function RootLayout() {
 
   // Wide and dark screens keep the pre-rendered (phone, light) page hidden until React has redrawn it
   // for them (+html.tsx): they see the page once, as before, instead of a phone page that then changes.
+  // Effects run once React has taken the page over; the screens below find the width and scheme changed
+  // in their own effects, just before this one, and React redraws them before the browser paints again.
+  // (A state flip here instead would draw the whole app a second time.)
   useEffect(() => {
-    if (onWeb && takenOver) document.getElementById('root')?.setAttribute('data-ready', 'true');
-  }, [takenOver]);
+    if (onWeb) document.getElementById('root')?.setAttribute('data-ready', 'true');
+  }, []);
 
   if (!fontsLoaded && !fontError && !onWeb) return null;
 
@@ -59,7 +59,8 @@ export default function RootLayout() {
   };
 
   return (
-    <SafeAreaProvider>
+    // expo-router already wraps the app in the safe-area provider the screens read their insets from.
+    <>
       <Head>
         <title>Ritorno</title>
       </Head>
@@ -69,6 +70,6 @@ export default function RootLayout() {
           <Slot />
         </ThemeProvider>
       </QueryClientProvider>
-    </SafeAreaProvider>
+    </>
   );
 }

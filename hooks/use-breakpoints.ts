@@ -2,22 +2,26 @@ import { useSyncExternalStore } from 'react';
 import { Dimensions } from 'react-native';
 import { breakpoints } from '@/constants/theme';
 
+type Layout = 'phone' | 'medium' | 'wide';
+
 function subscribe(onChange: () => void): () => void {
   const subscription = Dimensions.addEventListener('change', onChange);
   return () => subscription.remove();
 }
 
-const windowWidth = () => Dimensions.get('window').width;
-// The web pages are rendered ahead of time for a phone (width 0: no wider panes). While React takes over
-// such a page it must render the same, so it reads this first and re-renders at once at the real width.
-const prerenderedWidth = () => 0;
+function layoutOf(width: number): Layout {
+  if (width >= breakpoints.wide) return 'wide';
+  return width >= breakpoints.medium ? 'medium' : 'phone';
+}
+
+const windowLayout = () => layoutOf(Dimensions.get('window').width);
+// The web pages are rendered ahead of time for a phone. While React takes over such a page it must render
+// the same, so it reads this first and re-renders at once where the screen is wider. The layout, not the
+// width, is what is compared: on a phone nothing re-renders, and resizing within a layout redraws nothing.
+const prerenderedLayout = (): Layout => 'phone';
 
 /** One place that decides the layout: phone first, wider panes from `medium`, side navigation from `wide`. */
 export function useBreakpoints() {
-  const width = useSyncExternalStore(subscribe, windowWidth, prerenderedWidth);
-  return {
-    width,
-    isMedium: width >= breakpoints.medium,
-    isWide: width >= breakpoints.wide,
-  };
+  const layout = useSyncExternalStore(subscribe, windowLayout, prerenderedLayout);
+  return { isMedium: layout !== 'phone', isWide: layout === 'wide' };
 }

@@ -4,9 +4,18 @@ import { useMeQuery } from '@/hooks/use-me';
 // Someone already signed in has no use for these three; invitation and reset links still open.
 const signedOutOnly = ['/sign-in', '/sign-up', '/forgot-password'];
 
-export default function AuthLayout() {
+/** Sends someone signed in away from the signed-out screens; only this redraws when the answer comes. */
+function AwayIfSignedIn() {
   const me = useMeQuery();
   const pathname = usePathname();
-  if (me.isSuccess && signedOutOnly.includes(pathname)) return <Redirect href="/" />;
-  return <Slot />;
+  return me.isSuccess && signedOutOnly.includes(pathname) ? <Redirect href="/" /> : null;
+}
+
+export default function AuthLayout() {
+  return (
+    <>
+      <AwayIfSignedIn />
+      <Slot />
+    </>
+  );
 }

@@ -10,7 +10,11 @@ import { TextLink } from '@/components/ui/text-link';
 import { AcceptInvitationForm } from './accept-invitation-form';
 
 // "4 March 2027" as date-fns wrote it, from the browser's own Intl: date-fns stays out of the sign-in screens' JavaScript.
-const expiryDate = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' });
+// Made on first use: building a formatter costs a phone tens of milliseconds, and every route module runs
+// at start-up while only an invitation link shows the date.
+let expiryDate: Intl.DateTimeFormat | undefined;
+const formatExpiry = (iso: string) =>
+  (expiryDate ??= new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' })).format(new Date(iso));
 
 export interface InvitationAcceptanceProps {
   token: string;
@@ -45,7 +49,7 @@ export function InvitationAcceptance({ token, onSignedIn }: InvitationAcceptance
         <AppText variant="bodyStrong">{`${invitation.invitedBy} invited you as a ${invitation.role}.`}</AppText>
         <AppText>{purpose}</AppText>
         <AppText variant="caption" tone="muted">
-          {`Account: ${invitation.name}, ${invitation.email}. The link expires on ${expiryDate.format(new Date(invitation.expiresAt))}.`}
+          {`Account: ${invitation.name}, ${invitation.email}. The link expires on ${formatExpiry(invitation.expiresAt)}.`}
         </AppText>
       </Card>
       <AcceptInvitationForm token={token} onSignedIn={onSignedIn} />
