@@ -1,4 +1,4 @@
-import { useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { MusicianHomeSchema } from '@/shared/schemas/musician';
 
@@ -8,9 +8,11 @@ export const musicianHomeKeys = {
 };
 
 /** The signed-in musician's own summary: instrument, clinician and plan (null until prescribed). */
+export const musicianHomeQuery = queryOptions({
+  queryKey: musicianHomeKeys.current(),
+  queryFn: ({ signal }) => api('/api/me/musician', { schema: MusicianHomeSchema, signal }),
+});
+
 export function useMusicianHomeQuery() {
-  return useQuery({
-    queryKey: musicianHomeKeys.current(),
-    queryFn: ({ signal }) => api('/api/me/musician', { schema: MusicianHomeSchema, signal }),
-  });
+  return useQuery(musicianHomeQuery);
 }

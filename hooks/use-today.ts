@@ -1,4 +1,4 @@
-import { useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { TodaySchema } from '@/shared/schemas/today';
 
@@ -8,9 +8,11 @@ export const todayKeys = {
 };
 
 /** Today's programme for the signed-in musician, from the plan as it now stands. */
+export const todayQuery = queryOptions({
+  queryKey: todayKeys.current(),
+  queryFn: ({ signal }) => api('/api/today', { schema: TodaySchema, signal }),
+});
+
 export function useTodayQuery() {
-  return useQuery({
-    queryKey: todayKeys.current(),
-    queryFn: ({ signal }) => api('/api/today', { schema: TodaySchema, signal }),
-  });
+  return useQuery(todayQuery);
 }

@@ -1,6 +1,6 @@
 import { use, type ComponentType } from 'react';
 
-type Screens = typeof import('./signed-in-screens');
+type Screens = import('./signed-in-screens').SignedInScreens;
 type ScreenName = { [K in keyof Screens]: Screens[K] extends ComponentType<never> ? K : never }[keyof Screens];
 
 let loaded: Screens | undefined;
@@ -12,7 +12,7 @@ let pending: Promise<Screens> | undefined;
  * in, so both travel at the same time. A failed download is forgotten, so the next render tries again.
  */
 export function loadSignedInScreens(): Promise<Screens> {
-  pending ??= import('./signed-in-screens').then(
+  pending ??= import('./signed-in-screens').then((chunk) => chunk.openSignedInScreens()).then(
     (module) => (loaded = module),
     (error: unknown) => {
       pending = undefined;

@@ -1,7 +1,8 @@
-import { Suspense } from 'react';
+import { Suspense, useDeferredValue } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Redirect, Slot } from 'expo-router';
 import { spacing } from '@/constants/theme';
+import { useFirstReads } from '@/hooks/use-first-reads';
 import { useMeQuery } from '@/hooks/use-me';
 import { useTheme } from '@/hooks/use-theme';
 import { isApiError } from '@/lib/api-client';
@@ -16,6 +17,10 @@ export function SessionGate() {
   // The signed-in screens' chunk downloads while the account loads, not after it (in the browser only:
   // pre-rendering stops at the loading state).
   if (typeof window !== 'undefined') loadSignedInScreens().catch(() => undefined);
+  useFirstReads(me.data?.role);
+  // The account comes in an update React must draw in one go (the query cache's). Drawn from a deferred
+  // copy, the signed-in screens it opens are drawn in a second pass that React can pause for input.
+  const account = useDeferredValue(me.data);
   const opening = (
     <View style={[styles.center, { backgroundColor: colors.background }]}>
       <LoadingState label="Opening Ritorno…" />
@@ -30,9 +35,10 @@ export function SessionGate() {
       </View>
     );
   }
+  if (!account) return opening;
   return (
     <Suspense fallback={opening}>
-      <AppShell me={me.data}>
+      <AppShell me={account}>
         <Slot />
       </AppShell>
     </Suspense>

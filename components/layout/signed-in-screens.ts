@@ -1,18 +1,33 @@
-// Everything only a signed-in person sees, in one module so Metro puts it in one chunk that the web app
-// loads on demand (components/layout/lazy-screens.tsx). Keep it one chunk: Expo's serializer moves
-// modules that two async chunks share into a common chunk that every page loads up front.
-export { AppShell } from './app-shell';
-export { MailList } from '@/components/admin/mail-list';
-export { MailMessage } from '@/components/admin/mail-message';
-export { UserList } from '@/components/admin/user-list';
-export { FullAudit } from '@/components/audit/full-audit';
-export { CaseloadView } from '@/components/caseload/caseload-view';
-export { HistoryView } from '@/components/history/history-view';
-export { MyPlanView } from '@/components/my-plan/my-plan-view';
-export { PlanBuilderScreen } from '@/components/plan-builder/plan-builder-screen';
-export { RecordView } from '@/components/record/record-view';
-export { SharingView } from '@/components/sharing/sharing-view';
-export { StudentClearanceView } from '@/components/teacher/student-clearance-view';
-export { StudentList } from '@/components/teacher/student-list';
-export { SessionScreen } from '@/components/today/session-screen';
-export { TodayView } from '@/components/today/today-view';
+// The chunk of everything only a signed-in person sees: the web app loads it on demand
+// (components/layout/lazy-screens.tsx). Keep it one chunk: Expo's serializer moves modules that two async
+// chunks share into a common chunk that every page loads up front.
+import { startInSteps } from '@/lib/start-in-steps';
+
+/* eslint-disable @typescript-eslint/no-require-imports -- each step runs its modules when it is called. */
+
+export type SignedInScreens = typeof import('./signed-in-screen-list');
+
+/**
+ * Runs the chunk's modules a screen at a time, the browser given its main thread in between (as the
+ * app's own start, index.ts), then hands over the screens. Today's comes first: it is the one most opened.
+ */
+export async function openSignedInScreens(): Promise<SignedInScreens> {
+  await startInSteps([
+    () => require('./app-shell'),
+    () => require('@/components/today/today-view'),
+    () => require('@/components/today/session-screen'),
+    () => require('@/components/my-plan/my-plan-view'),
+    () => require('@/components/history/history-view'),
+    () => require('@/components/sharing/sharing-view'),
+    () => require('@/components/caseload/caseload-view'),
+    () => require('@/components/record/record-view'),
+    () => require('@/components/plan-builder/plan-builder-screen'),
+    () => require('@/components/teacher/student-list'),
+    () => require('@/components/teacher/student-clearance-view'),
+    () => require('@/components/admin/user-list'),
+    () => require('@/components/admin/mail-list'),
+    () => require('@/components/admin/mail-message'),
+    () => require('@/components/audit/full-audit'),
+  ]);
+  return require('./signed-in-screen-list');
+}
