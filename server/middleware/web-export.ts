@@ -22,7 +22,8 @@ const SCRIPTS = '_expo/static/js/web';
 
 // What the app asks the API for first, fetched while the page and its scripts download instead of after
 // the app has started: the session and the account on every page, and the day itself on the musician's
-// Today (/home). The links must match the app's own requests (same URL, credentials included) to be used.
+// Today (/home). The links must match the app's own requests (same URL, credentials included) to be used;
+// the app starts the same reads as soon as it knows the account (hooks/use-first-reads.ts).
 const ACCOUNT_READS = ['/api/auth/get-session', '/api/me'];
 const FIRST_READS: Record<string, string[]> = { home: ['/api/today', '/api/me/musician'] };
 const fetchPreload = (href: string) => `<link rel="preload" as="fetch" href="${href}" crossorigin="use-credentials" />`;
