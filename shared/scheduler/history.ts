@@ -12,7 +12,8 @@ export type HistoryKind =
   | 'clinician_resume'
   | 'clinician_advance'
   | 'clinician_step_back'
-  | 'over_time';
+  | 'over_time'
+  | 'short_day';
 
 /** One explained change, e.g. "Stepped back to stage 2 on 12 May 2025: pain 4 after block 2." */
 export type HistoryEvent = {

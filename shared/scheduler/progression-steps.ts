@@ -4,6 +4,7 @@ import type { PlanSettings } from '../schemas/plan-settings';
 import { fromDay } from './dates';
 import { gateWhere, spokenDate, type HistoryEvent, type HistoryKind, type ProgressionStatus } from './history';
 import type { Level } from './ladder';
+import { sessionsPlannedOn } from './sessions';
 import { isRestDay } from './stages';
 
 /** The running state while check-ins and overrides are replayed (day numbers, see dates.ts). */
@@ -28,7 +29,15 @@ export type Hooks = {
   log: (day: number, kind: HistoryKind, from: number, message: string, by?: string) => void;
 };
 
-export function processSessions(settings: PlanSettings, ladder: Level[], s: Sim, day: number, list: SessionCheckIn[], h: Hooks): void {
+/**
+ * The day's session check-ins: a gate over the threshold fails the day, a red flag stops all playing.
+ * A day counts toward moving up only once every session of its programme has been played without
+ * symptoms: part of a day says nothing yet about the stage's full load (common practice: progress on the
+ * level as prescribed). A day left short is said so in the history once it is over.
+ */
+export function processSessions(
+  settings: PlanSettings, ladder: Level[], s: Sim, day: number, list: SessionCheckIn[], h: Hooks, isToday = false,
+): void {
   if (list.length === 0) return;
   let failed = false;
   let played = 0;
@@ -46,6 +55,14 @@ export function processSessions(settings: PlanSettings, ladder: Level[], s: Sim,
   if (played > planned && !failed)
     h.log(day, 'over_time', s.stage, `Played ${played} minutes on ${spokenDate(fromDay(day))}, more than the ${planned} planned: keep to the timings even when it feels fine.`);
   if (failed || s.stoppedSince || isRestDay(settings, day)) return;
+  const level = ladder[s.stage];
+  const due = level ? sessionsPlannedOn(settings, level, fromDay(day)) : 0;
+  const sessionsPlayed = new Set(list.map((c) => c.sessionIndex)).size;
+  if (sessionsPlayed < due) {
+    if (!isToday)
+      h.log(day, 'short_day', s.stage, `Played ${sessionsPlayed} of ${due} sessions on ${spokenDate(fromDay(day))}: a stage moves up on full days only, so this day does not count.`);
+    return;
+  }
   if (settings.requireNextMorningCheck) s.pending = day;
   else s.done += 1;
 }

@@ -53,7 +53,8 @@ function byDate<T extends { date: string }>(items: T[]): Map<string, T[]> {
  * then the clinician's overrides (they answer what was reported). Rules: a gate above the threshold
  * ends the session and, after `failuresBeforeStepBack` failed days, steps back one stage (BAPAM: back
  * to the previous level until you can progress), otherwise holds; a stage is passed after its minimum
- * playing days without symptoms, including the next morning; a red flag stops all playing until cleared.
+ * full playing days (every planned session) without symptoms, including the next morning; a red flag
+ * stops all playing until cleared.
  */
 export function progressionState(input: ProgressionInput): ProgressionState {
   const { settings } = input;
@@ -127,7 +128,7 @@ export function progressionState(input: ProgressionInput): ProgressionState {
       log(day, 'advanced', from, `Moved up to stage ${number(s.stage)} on ${spokenDate(date)} after ${settings.minDaysPerStage} playing days without symptoms.`);
     }
     s.levels.push(ladder[s.stage]?.minutesPerDay ?? 0);
-    processSessions(settings, ladder, s, day, sessions.get(date) ?? [], { stop, fail, log });
+    processSessions(settings, ladder, s, day, sessions.get(date) ?? [], { stop, fail, log }, day === todayDay);
     processReports(settings, s, day, reports.get(date) ?? [], { stop, fail, log });
     for (const o of overrides.get(date) ?? []) applyOverride(ladder, s, day, o, { moveTo, log });
   }

@@ -106,6 +106,19 @@ function dayKind(settings: PlanSettings, date: string): 'playing' | 'taper' | 'e
   return 'playing';
 }
 
+/** A playing day's minutes and how many sessions they are split into: fewer on the lighter days before the event. */
+function dayShape(settings: PlanSettings, level: Level, date: string) {
+  const kind = dayKind(settings, date);
+  const light = kind !== 'playing';
+  const total = light ? Math.max(1, Math.round((level.minutesPerDay * settings.taperPercent) / 100)) : level.minutesPerDay;
+  return { kind, light, total, count: Math.min(level.sessionsPerDay, Math.ceil(total / settings.maxSessionMinutes)) };
+}
+
+/** How many sessions a playing day at this level holds (what a full day of playing means). */
+export function sessionsPlannedOn(settings: PlanSettings, level: Level, date: string): number {
+  return dayShape(settings, level, date).count;
+}
+
 /** The day's programme from a ladder already built (used in loops over many days). */
 export function programmeFor(settings: PlanSettings, ladder: Level[], view: PlanView, date: string): DayProgramme {
   const empty = (kind: DayKind, notes: string[] = []): DayProgramme => ({
@@ -118,10 +131,7 @@ export function programmeFor(settings: PlanSettings, ladder: Level[], view: Plan
   if (isRestDay(settings, toDay(date))) return empty('rest', ['Rest day: no playing.']);
   const level = ladder[period.stageIndex];
   if (!level) return empty('before_start');
-  const kind = dayKind(settings, date);
-  const light = kind !== 'playing';
-  const total = light ? Math.max(1, Math.round((level.minutesPerDay * settings.taperPercent) / 100)) : level.minutesPerDay;
-  const count = Math.min(level.sessionsPerDay, Math.ceil(total / settings.maxSessionMinutes));
+  const { kind, light, total, count } = dayShape(settings, level, date);
   const sessions = split(total, count).map((minutes, index): DaySession => {
     const startTime = settings.sessionTimes[index] ?? settings.sessionTimes[settings.sessionTimes.length - 1] ?? '10:00';
     return {

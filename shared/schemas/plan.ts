@@ -129,7 +129,7 @@ export const HistoryEventSchema = z.object({
   date: LocalDateSchema,
   kind: z.enum([
     'advanced', 'held', 'stepped_back', 'stopped', 'red_flag_cleared',
-    'clinician_hold', 'clinician_resume', 'clinician_advance', 'clinician_step_back', 'over_time',
+    'clinician_hold', 'clinician_resume', 'clinician_advance', 'clinician_step_back', 'over_time', 'short_day',
   ]),
   fromStage: z.number().int(),
   toStage: z.number().int(),

@@ -2,6 +2,8 @@ import {
   addDays,
   defaultPlanSettings,
   isRestDay,
+  progressionState,
+  sessionsForDate,
   toDay,
   type CheckIn,
   type PlanSettings,
@@ -15,11 +17,11 @@ export function settingsWith(values: Partial<RequiredPlanInput> = {}): PlanSetti
   return defaultPlanSettings({ startDate: '2025-03-03', event: SHOWCASE, ...values });
 }
 
-export function cleanSession(date: string, minutes = 10): CheckIn {
+export function cleanSession(date: string, minutes = 10, sessionIndex = 0): CheckIn {
   return {
     kind: 'session',
     date,
-    sessionIndex: 0,
+    sessionIndex,
     gates: [
       { position: 'before', pain: 0 },
       { position: 'after', afterBlock: 2, pain: 0 },
@@ -49,12 +51,19 @@ export function morning(date: string, pain = 0, redFlags: CheckIn['redFlags'] = 
   return { kind: 'next_morning', date, pain, redFlags };
 }
 
-/** A musician who plays every playing day from `from` to `to` without symptoms and checks the next morning. */
-export function followPlan(settings: PlanSettings, from: string, to: string): CheckIn[] {
+/**
+ * A musician who plays every session of every playing day from `from` to `to` as the plan then stands,
+ * without symptoms, and checks the next morning.
+ */
+export function followPlan(settings: PlanSettings, from: string, to: string, earlier: CheckIn[] = []): CheckIn[] {
   const out: CheckIn[] = [];
   for (let d = from; d <= to; d = addDays(d, 1)) {
     if (isRestDay(settings, toDay(d))) continue;
-    out.push(cleanSession(d), morning(addDays(d, 1)));
+    const state = progressionState({ settings, checkIns: [...earlier, ...out], overrides: [], today: d });
+    const { sessions } = sessionsForDate(settings, state, d);
+    if (sessions.length === 0) continue;
+    for (const session of sessions) out.push(cleanSession(d, session.playingMinutes, session.index));
+    out.push(morning(addDays(d, 1)));
   }
   return out;
 }

@@ -18,6 +18,34 @@ describe('progression from check-ins', () => {
     expect(state.history[0]!.message).toBe('Moved up to stage 2 on 6 Mar 2025 after 3 playing days without symptoms.');
   });
 
+  describe('on days of more than one session', () => {
+    // Short sessions make every stage's day two sessions, so a day can be left half played.
+    const split = settingsWith({ maxSessionMinutes: 5, targetMinutesPerDay: 15 });
+    const firstDay = sessionsForDate(split, null, '2025-03-03');
+
+    it('does count a day toward moving up only once all its sessions are played (common practice: the level as prescribed)', () => {
+      expect(firstDay.sessions.length).toBe(2);
+      const full = followPlan(split, '2025-03-03', '2025-03-05');
+      expect(progressionState({ settings: split, checkIns: full, overrides: [], today: '2025-03-06' }).stageNumber).toBe(2);
+
+      // The third day with its second session never played: still stage 1, and the history says why.
+      const short = full.filter((c) => !(c.kind === 'session' && c.date === '2025-03-05' && c.sessionIndex === 1));
+      const state = progressionState({ settings: split, checkIns: short, overrides: [], today: '2025-03-06' });
+      expect(state).toMatchObject({ stageNumber: 1, cleanDays: 2 });
+      expect(state.history.at(-1)).toMatchObject({ kind: 'short_day', date: '2025-03-05' });
+      expect(state.history.at(-1)!.message).toBe('Played 1 of 2 sessions on 5 Mar 2025: a stage moves up on full days only, so this day does not count.');
+    });
+
+    it('does not call today short while its later sessions can still be played', () => {
+      const today = [...followPlan(split, '2025-03-03', '2025-03-04'), cleanSession('2025-03-05', 5, 0)];
+      const midDay = progressionState({ settings: split, checkIns: today, overrides: [], today: '2025-03-05' });
+      expect(midDay.history.some((event) => event.kind === 'short_day')).toBe(false);
+      expect(midDay.cleanDays).toBe(2);
+      const evening = progressionState({ settings: split, checkIns: [...today, cleanSession('2025-03-05', 5, 1)], overrides: [], today: '2025-03-05' });
+      expect(evening.cleanDays).toBe(3);
+    });
+  });
+
   it('does not move up when the next-morning check of the third day is missing (symptoms may come the next day: BAPAM)', () => {
     const checkIns = followPlan(settings, '2025-03-03', '2025-03-05').filter((c) => c.date !== '2025-03-06');
     const state = progressionState({ settings, checkIns, overrides: [], today: '2025-03-07' });
