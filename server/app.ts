@@ -8,6 +8,7 @@ import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { trustedOrigins } from './lib/origins';
 import { sameOriginWrites } from './middleware/same-origin';
 import { signInLimit } from './middleware/sign-in-limit';
+import { readSession } from './middleware/session-cache';
 import { webExport } from './middleware/web-export';
 import { adminRoutes } from './routes/admin.routes';
 import { calendarRoutes } from './routes/calendar.routes';
@@ -73,7 +74,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api', apiNotFound);
 
   if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) {
-    app.use(webExport(deps.webDir));
+    app.use(webExport(deps.webDir, { isSignedIn: async (req) => (await readSession(deps.auth, req.headers)) !== null }));
   }
 
   app.use(errorHandler);

@@ -107,8 +107,17 @@ function matches(pageSegments: (string | null)[], urlSegments: string[]): boolea
   return pageSegments.length === urlSegments.length && pageSegments.every((segment, index) => segment === null || segment === urlSegments[index]);
 }
 
+// Screens with no use to someone signed in: the server sends them home before any page is drawn (the app
+// does the same for its own navigations, app/(auth)/_layout.tsx).
+const SIGNED_OUT_ONLY = new Set(['/sign-in', '/sign-up', '/forgot-password']);
+
+export interface WebExportOptions {
+  /** Whether the request comes with a valid session (not merely a session cookie). */
+  isSignedIn?: (req: Request) => Promise<boolean>;
+}
+
 /** Serves the web export: hashed files for a year, each route its pre-rendered page, revalidated. */
-export function webExport(webDir: string): Router {
+export function webExport(webDir: string, options: WebExportOptions = {}): Router {
   const root = path.resolve(webDir);
   // Read once: `npm start` exports before the server starts, and a new export means a restart.
   const { pages, notFound } = readPages(root);
@@ -130,7 +139,10 @@ export function webExport(webDir: string): Router {
   // Every other path is a screen: its pre-rendered page, which the app's router then takes over (deep
   // links included). An unknown path gets the not-found page with a 404, or, from a single-page export,
   // index.html. The page depends on the cookie, so caches must keep the two answers apart.
-  router.get('/{*splat}', (req, res) => {
+  router.get('/{*splat}', async (req, res) => {
+    if (SIGNED_OUT_ONLY.has(req.path) && hasSession(req) && (await options.isSignedIn?.(req))) {
+      return void res.set({ 'Cache-Control': 'no-store', Vary: 'Cookie' }).redirect(302, '/');
+    }
     // Express has already refused a path that is not valid percent-encoding (its route parameter).
     const urlSegments = req.path.split('/').filter(Boolean).map((segment) => decodeURIComponent(segment));
     const found = single ? pages[0] : pages.find((p) => matches(p.segments, urlSegments));

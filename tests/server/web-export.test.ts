@@ -5,7 +5,7 @@ import path from 'node:path';
 import request from 'supertest';
 import { createApp } from '@/server/app';
 import { memoryStorage } from '@/server/lib/storage';
-import { createTestContext } from './support/test-app';
+import { createAccount, createTestContext, PASSWORD } from './support/test-app';
 
 const escape = (text: string) => text.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
 
@@ -86,7 +86,7 @@ describe('the web export', () => {
     expect(response.text.replace(/<link rel="preload" as="fetch" href="[^"]+" crossorigin="use-credentials" \/>/g, '')).toBe(INDEX);
   });
 
-  function appWithStaticExport() {
+  function appWithStaticExport(base = createTestContext()) {
     const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ritorno-web-'));
     const pageHtml = (name: string) => `<!doctype html><html><head><title>${name}</title></head><body><script type="module">globalThis.__EXPO_ROUTER_HYDRATE__=true;</script><script src="/_expo/static/js/web/entry-abc123.js" defer></script></body></html>`;
     for (const file of ['index.html', 'sign-in.html', 'home.html', 'musicians/[id].html', 'musicians/[id]/plan/new.html', 'musicians/[id]/plan/[planId].html', 'mailbox/index.html', 'mailbox/[id].html', '(app)/home.html', '(auth)/sign-in.html', '_sitemap.html', '+not-found.html']) {
@@ -95,9 +95,29 @@ describe('the web export', () => {
     }
     fs.mkdirSync(path.join(webDir, '_expo/static/js/web'), { recursive: true });
     fs.writeFileSync(path.join(webDir, '_expo/static/js/web/signed-in-screens-def456.js'), 'chunk');
-    const base = createTestContext();
     return createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), storage: memoryStorage(), webDir });
   }
+
+  it('does send someone signed in home from the signed-out screens before any page is drawn, and nobody else', async () => {
+    const base = createTestContext();
+    await createAccount(base, 'musician', 'hana.okoro@example.test');
+    const signIn = await request(base.app).post('/api/auth/sign-in/email').send({ email: 'hana.okoro@example.test', password: PASSWORD });
+    const cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
+    const app = appWithStaticExport(base);
+    for (const url of ['/sign-in', '/sign-up', '/forgot-password']) {
+      const response = await request(app).get(url).set('Cookie', cookie);
+      expect([url, response.status, response.headers.location]).toEqual([url, 302, '/']);
+      expect(response.headers['cache-control']).toBe('no-store');
+    }
+    // Other pages still open for them; a cookie whose session is gone, or none, gets the sign-in page.
+    expect((await request(app).get('/home').set('Cookie', cookie)).status).toBe(200);
+    for (const other of ['better-auth.session_token=gone.gone', undefined]) {
+      const call = request(app).get('/sign-in');
+      const response = other ? await call.set('Cookie', other) : await call;
+      expect(response.status).toBe(200);
+      expect(response.text).toContain('<title>sign-in.html</title>');
+    }
+  });
 
   it('does answer each route with its pre-rendered page, dynamic segments included, when the export is static', async () => {
     const app = appWithStaticExport();
