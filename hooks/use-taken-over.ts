@@ -1,12 +1,19 @@
-import { useSyncExternalStore } from 'react';
+import { startTransition, useEffect, useState } from 'react';
 
-const noSubscription = () => () => undefined;
+// Set once React has taken a pre-rendered page over: components mounted after that start taken over.
+let pageTakenOver = false;
 
 /**
  * False while React takes over a pre-rendered web page (and during pre-rendering), true from the render
- * right after. What the pre-rendering cannot know (a link's query string, the screen's width) must not
- * change the first render, or React throws the page away; show such things once this is true.
+ * right after. What the pre-rendering cannot know (a link's query string) must not change the first
+ * render, or React throws the page away; show such things once this is true. The switch is a transition:
+ * React draws it when the browser has time, not in the same task as taking the page over.
  */
 export function useTakenOver(): boolean {
-  return useSyncExternalStore(noSubscription, () => true, () => false);
+  const [takenOver, setTakenOver] = useState(pageTakenOver);
+  useEffect(() => {
+    pageTakenOver = true;
+    if (!takenOver) startTransition(() => setTakenOver(true));
+  }, [takenOver]);
+  return takenOver;
 }
