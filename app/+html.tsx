@@ -1,9 +1,12 @@
 import type { PropsWithChildren } from 'react';
-import { ScrollViewStyleReset } from 'expo-router/html';
+import { ScrollViewStyleReset, useServerDocumentContext } from 'expo-router/html';
 import { breakpoints, colors } from '@/constants/theme';
 
+// The server draws every page when it is asked for (server/middleware/web-export.ts), for a phone in
+// light mode, with the data its visitor's first draw needs; expo-router hands this document the page's
+// styles and scripts (headNodes, bodyNodes).
 // The page background follows the system appearance before React starts, so there is no white flash.
-// Every page is pre-rendered as a phone in light mode, shown at once there; a wider or dark screen keeps
+// A phone in light mode shows the drawn page at once; a wider or dark screen keeps
 // it hidden until React has redrawn it for that screen (app/_layout.tsx sets data-ready).
 const background = `
 body { background-color: ${colors.light.background}; }
@@ -13,6 +16,7 @@ body { background-color: ${colors.light.background}; }
 
 /** The web document. The viewport keeps pinch-zoom on purpose: never add user-scalable=no. */
 export default function Root({ children }: PropsWithChildren) {
+  const { headNodes, bodyNodes } = useServerDocumentContext();
   return (
     <html lang="en">
       <head>
@@ -22,9 +26,14 @@ export default function Root({ children }: PropsWithChildren) {
         <meta name="description" content="Ritorno: graded return to playing after a playing-related injury." />
         <meta name="theme-color" content={colors.light.background} />
         <ScrollViewStyleReset />
+        <title>Ritorno</title>
         <style dangerouslySetInnerHTML={{ __html: background }} />
+        {headNodes}
       </head>
-      <body>{children}</body>
+      <body>
+        {children}
+        {bodyNodes}
+      </body>
     </html>
   );
 }

@@ -1,4 +1,4 @@
-import { useEffect } from 'react';
+import { useEffect, useLayoutEffect, useState } from 'react';
 import { Platform } from 'react-native';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { DarkTheme, DefaultTheme, Slot, ThemeProvider } from 'expo-router';
@@ -7,8 +7,10 @@ import Head from 'expo-router/head';
 import * as SplashScreen from 'expo-splash-screen';
 import { StatusBar } from 'expo-status-bar';
 import { fontFiles } from '@/constants/theme';
+import { seedFirstReads, useServedReads } from '@/hooks/use-first-reads';
 import { useTheme } from '@/hooks/use-theme';
-import { queryClient } from '@/lib/query-client';
+import { restorePreviewScroll } from '@/lib/preview-scroll';
+import { createQueryClient, queryClient } from '@/lib/query-client';
 
 // Hold the splash screen until the fonts are in, so text never jumps from one face to another.
 SplashScreen.preventAutoHideAsync().catch(() => undefined);
@@ -16,8 +18,8 @@ SplashScreen.preventAutoHideAsync().catch(() => undefined);
 // On the web, waiting for four font files before the first paint cost seconds on a slow phone
 // connection: there every family is followed by a system stack (constants/theme.ts), text shows at once
 // in it and the face swaps in when it arrives (font-display: swap). Native apps keep the splash hold.
-// The web pages are pre-rendered, and the fonts are asked for only in the browser, once this module
-// runs: registered during pre-rendering, every page would preload them and they would compete with the
+// The server draws the web pages, and the fonts are asked for only in the browser, once this module
+// runs: registered while the server draws, every page would preload them and they would compete with the
 // app's script on a slow connection. (The icon font: components/ui/icon.tsx.)
 const onWeb = Platform.OS === 'web';
 if (onWeb && typeof window !== 'undefined') {
@@ -28,18 +30,27 @@ if (onWeb && typeof window !== 'undefined') {
 export default function RootLayout() {
   const [fontsLoaded, fontError] = useFonts(onWeb ? {} : fontFiles);
   const { scheme, colors } = useTheme();
+  // The server draws each page for one visitor: a cache of its own per page it draws, never shared, with
+  // the reads it answered for the page in it before anything below asks for them. (In the browser the
+  // app's one cache has them already: index.ts puts them in before the first render.)
+  const served = useServedReads();
+  const [client] = useState(() => {
+    if (typeof window !== 'undefined') return queryClient;
+    const cache = createQueryClient();
+    seedFirstReads(cache, served);
+    return cache;
+  });
 
   useEffect(() => {
     if (fontsLoaded || fontError) SplashScreen.hideAsync().catch(() => undefined);
   }, [fontsLoaded, fontError]);
 
-  // Wide and dark screens keep the pre-rendered (phone, light) page hidden until React has redrawn it
-  // for them (+html.tsx): they see the page once, as before, instead of a phone page that then changes.
-  // Effects run once React has taken the page over; the screens below find the width and scheme changed
-  // in their own effects, just before this one, and React redraws them before the browser paints again.
-  // (A state flip here instead would draw the whole app a second time.)
-  useEffect(() => {
-    if (onWeb) document.getElementById('root')?.setAttribute('data-ready', 'true');
+  // The server draws each page for a phone in light mode; wide and dark screens keep it hidden until the
+  // app has drawn its own copy for them (+html.tsx), and the copy is scrolled where its preview was left.
+  useLayoutEffect(() => {
+    if (!onWeb) return;
+    restorePreviewScroll();
+    document.getElementById('root')?.setAttribute('data-ready', 'true');
   }, []);
 
   if (!fontsLoaded && !fontError && !onWeb) return null;
@@ -64,7 +75,7 @@ export default function RootLayout() {
       <Head>
         <title>Ritorno</title>
       </Head>
-      <QueryClientProvider client={queryClient}>
+      <QueryClientProvider client={client}>
         <ThemeProvider value={navigationTheme}>
           <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
           <Slot />

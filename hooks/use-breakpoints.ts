@@ -15,7 +15,7 @@ function layoutOf(width: number): Layout {
 }
 
 const windowLayout = () => layoutOf(Dimensions.get('window').width);
-// The web pages are rendered ahead of time for a phone. While React takes over such a page it must render
+// The server draws the web pages for a phone. While React hydrates such a page it must render
 // the same, so it reads this first and re-renders at once where the screen is wider. The layout, not the
 // width, is what is compared: on a phone nothing re-renders, and resizing within a layout redraws nothing.
 const prerenderedLayout = (): Layout => 'phone';

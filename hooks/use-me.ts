@@ -1,4 +1,4 @@
-import { useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, ApiError } from '@/lib/api-client';
 import { authClient } from '@/lib/auth-client';
 import { MeSchema } from '@/shared/schemas/role';
@@ -16,7 +16,9 @@ async function fetchMe(signal: AbortSignal) {
   return api('/api/me', { schema: MeSchema, signal });
 }
 
+export const meQuery = queryOptions({ queryKey: meKeys.current(), queryFn: ({ signal }) => fetchMe(signal) });
+
 /** The signed-in account; fails with ApiError 401 when nobody is signed in. */
 export function useMeQuery() {
-  return useQuery({ queryKey: meKeys.current(), queryFn: ({ signal }) => fetchMe(signal) });
+  return useQuery(meQuery);
 }

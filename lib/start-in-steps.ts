@@ -6,6 +6,7 @@
  * each its own task, lets the browser paint and handle input in between. Nothing is skipped or
  * reordered: a step only runs modules earlier than they would have run anyway.
  */
+/** One step; a step that returns a promise is waited for before the next. */
 export type Step = () => unknown;
 
 /** The browser's own yield where there is one, else a message to ourselves (no timer clamping). */
@@ -27,6 +28,6 @@ export function yieldToBrowser(): Promise<void> {
 export async function startInSteps(steps: readonly Step[], yieldNow: () => Promise<void> = yieldToBrowser): Promise<void> {
   for (const step of steps) {
     await yieldNow();
-    step();
+    await step();
   }
 }

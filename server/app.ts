@@ -1,5 +1,3 @@
-import fs from 'node:fs';
-import path from 'node:path';
 import { toNodeHandler } from 'better-auth/node';
 import compression from 'compression';
 import express from 'express';
@@ -9,7 +7,9 @@ import { trustedOrigins } from './lib/origins';
 import { sameOriginWrites } from './middleware/same-origin';
 import { signInLimit } from './middleware/sign-in-limit';
 import { readSession } from './middleware/session-cache';
-import { webExport } from './middleware/web-export';
+import { accountOf } from './middleware/auth';
+import { isWebExport, webExport } from './middleware/web-export';
+import { answerFirstReads } from './services/first-reads.service';
 import { adminRoutes } from './routes/admin.routes';
 import { calendarRoutes } from './routes/calendar.routes';
 import { checkInRoutes } from './routes/check-ins.routes';
@@ -73,8 +73,17 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api/admin', adminRoutes(deps));
   app.use('/api', apiNotFound);
 
-  if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) {
-    app.use(webExport(deps.webDir, { isSignedIn: async (req) => (await readSession(deps.auth, req.headers)) !== null }));
+  if (deps.webDir && isWebExport(deps.webDir)) {
+    app.use(
+      webExport(deps.webDir, {
+        visitor: async (req, pathname) => {
+          const session = await readSession(deps.auth, req.headers);
+          const me = session && accountOf(session);
+          if (!session) return { signedIn: false };
+          return { signedIn: true, reads: me ? answerFirstReads(deps.db, me, pathname, deps.now()) : undefined };
+        },
+      }),
+    );
   }
 
   app.use(errorHandler);

@@ -19,7 +19,7 @@ export interface ResetPasswordFormProps {
 
 export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   const reset = useResetPasswordMutation();
-  // The pre-rendered page cannot see the link's token: say it is missing only once the app runs.
+  // The server draws the page without the link's token: say it is missing only once the app runs.
   const takenOver = useTakenOver();
   const [formError, setFormError] = useState('');
   const [done, setDone] = useState(false);

@@ -14,8 +14,8 @@ import { AppShell, loadSignedInScreens } from './lazy-screens';
 export function SessionGate() {
   const { colors } = useTheme();
   const me = useMeQuery();
-  // The signed-in screens' chunk downloads while the account loads, not after it (in the browser only:
-  // pre-rendering stops at the loading state).
+  // The signed-in screens' chunk downloads while the account loads, not after it (in the browser; the
+  // server's renderer loads it through the stand-ins in lazy-screens.tsx as it draws the page).
   if (typeof window !== 'undefined') loadSignedInScreens().catch(() => undefined);
   useFirstReads(me.data?.role);
   // The account comes in an update React must draw in one go (the query cache's). Drawn from a deferred

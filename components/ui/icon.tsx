@@ -20,7 +20,7 @@ export interface IconProps {
 
 // On the web the icon font arrives after the first paint. It is asked for here, once, in
 // the browser (font-display: swap, so no text waits for it), and glyphs are drawn only once it is in:
-// before that a glyph would show as an empty box in the system font. Pages are pre-rendered without
+// before that a glyph would show as an empty box in the system font. Pages are drawn by the server without
 // glyphs, and the first render in the browser matches them (the server snapshot below). Native apps
 // load the font as vector-icons always has.
 let fontReady = Platform.OS !== 'web';

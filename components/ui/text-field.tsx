@@ -35,7 +35,7 @@ export function TextField<T extends FieldValues, O = T>({
   const { field, fieldState } = useController<T, FieldPath<T>, O>({ control, name });
   const [focused, setFocused] = useState(false);
   const [revealed, setRevealed] = useState(false);
-  // A pre-rendered page shows its fields before the app runs; React empties them when it takes the page
+  // A page drawn by the server shows its fields before the app runs; React empties them when it takes the page
   // over, so what was typed before then would vanish. They take typing from that moment on.
   const takenOver = useTakenOver();
   const error = fieldState.error?.message;

@@ -13,14 +13,22 @@ declare global {
   }
 }
 
+type Session = NonNullable<Awaited<ReturnType<typeof readSession>>>;
+
+/** The account a session belongs to, or null when it has no role yet. */
+export function accountOf(session: Session): Me | null {
+  const role = RoleSchema.safeParse(session.user.role);
+  return role.success ? { id: session.user.id, name: session.user.name, email: session.user.email, role: role.data } : null;
+}
+
 /** Loads the session from cookie or bearer token; 401 without one. */
 export function requireSession(auth: Auth): RequestHandler {
   return async (req, res, next) => {
     const session = await readSession(auth, req.headers);
     if (!session) throw new HttpError(401, 'unauthenticated', 'Sign in to continue.');
-    const role = RoleSchema.safeParse(session.user.role);
-    if (!role.success) throw new HttpError(403, 'forbidden', 'This account has no role yet.');
-    res.locals.me = { id: session.user.id, name: session.user.name, email: session.user.email, role: role.data };
+    const me = accountOf(session);
+    if (!me) throw new HttpError(403, 'forbidden', 'This account has no role yet.');
+    res.locals.me = me;
     next();
   };
 }

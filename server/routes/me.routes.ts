@@ -1,8 +1,6 @@
 import { Router } from 'express';
-import type { MusicianHome } from '../../shared/schemas/musician';
 import { currentUser, requireRole, requireSession } from '../middleware/auth';
-import { getMusicianByUser } from '../services/musician.service';
-import { planOverview } from '../services/plan.service';
+import { musicianHome } from '../services/musician-home.service';
 import type { AppDeps } from './deps';
 
 export function meRoutes({ auth, db, now }: AppDeps): Router {
@@ -14,15 +12,7 @@ export function meRoutes({ auth, db, now }: AppDeps): Router {
   });
 
   router.get('/musician', requireRole('musician'), (_req, res) => {
-    const { musician, clinicianName } = getMusicianByUser(db, currentUser(res.locals).id);
-    const home: MusicianHome = {
-      id: musician.id,
-      name: musician.name,
-      instrument: musician.instrument,
-      clinicianName,
-      plan: planOverview(db, musician.id, now()),
-    };
-    res.json(home);
+    res.json(musicianHome(db, currentUser(res.locals).id, now()));
   });
 
   return router;

@@ -14,6 +14,20 @@ describe('starting in steps', () => {
     expect(events).toEqual(['yield', 'one', 'yield', 'two', 'yield', 'three']);
   });
 
+  it('waits for a step that returns a promise before the next one', async () => {
+    const events: string[] = [];
+    let finish: () => void = () => undefined;
+    const started = startInSteps(
+      [() => new Promise<void>((resolve) => (finish = () => (events.push('first done'), resolve()))), () => events.push('second')],
+      async () => undefined,
+    );
+    await new Promise((resolve) => setTimeout(resolve, 10));
+    expect(events).toEqual([]);
+    finish();
+    await started;
+    expect(events).toEqual(['first done', 'second']);
+  });
+
   it('does not run a step before the browser has had its turn', async () => {
     let ran = false;
     const started = startInSteps([() => (ran = true)]);

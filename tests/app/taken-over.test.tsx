@@ -1,8 +1,8 @@
 import { act, renderHook } from '@testing-library/react-native';
 import { useTakenOver } from '@/hooks/use-taken-over';
 
-// What only the browser knows waits until React has taken the pre-rendered page over (hooks/use-taken-over.ts).
-describe('taking over a pre-rendered page', () => {
+// What only the browser knows waits until React has taken the server-drawn page over (hooks/use-taken-over.ts).
+describe('taking over a server-drawn page', () => {
   it('does answer false on the first render, then true, and true at once for what mounts afterwards', async () => {
     const seen: boolean[] = [];
     const first = renderHook(() => {

@@ -8,9 +8,10 @@ import { musicianScenarios } from './musician.scenarios.mjs';
 import { teacherScenarios } from './teacher.scenarios.mjs';
 import { clinicianScenarios } from './clinician.scenarios.mjs';
 import { safetyScenarios } from './safety.scenarios.mjs';
+import { firstPaintScenarios } from './first-paint.scenarios.mjs';
 
 // The clinician's run last: it activates a new plan version for a musician other scenarios read.
-const scenarios = [...roleScenarios, ...teacherScenarios, ...musicianScenarios, ...safetyScenarios, ...clinicianScenarios];
+const scenarios = [...roleScenarios, ...firstPaintScenarios, ...teacherScenarios, ...musicianScenarios, ...safetyScenarios, ...clinicianScenarios];
 
 const require = createRequire(path.join(process.cwd(), 'package.json'));
 const { chromium } = require('playwright-core');

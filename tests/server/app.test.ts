@@ -1,11 +1,7 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import request from 'supertest';
-import { createApp } from '@/server/app';
-import { memoryStorage } from '@/server/lib/storage';
 import { musicianWithPlan } from './support/plan-fixture';
 import { createTestContext, signedInAgent } from './support/test-app';
+import { appServing, fakeWebExport } from './support/web-export-fixture';
 
 describe('the server shell', () => {
   it('answers unknown API routes with a JSON 404', async () => {
@@ -23,10 +19,8 @@ describe('the server shell', () => {
   });
 
   it('answers an address with a broken %-escape with 400, not 500, on pages and signed-in API routes', async () => {
-    const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ritorno-web-'));
-    fs.writeFileSync(path.join(webDir, 'index.html'), '<!doctype html><title>Ritorno</title>');
     const base = createTestContext();
-    const app = createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), storage: memoryStorage(), webDir });
+    const app = appServing(fakeWebExport(), base);
     const pia = await musicianWithPlan(base, { startDate: '2027-02-22' });
     const clinician = await signedInAgent(base, pia.clinicianEmail);
     for (const response of [await request(app).get('/musicians/%E0%A4%A'), await clinician.get('/api/musicians/%E0%A4%A')]) {
@@ -43,16 +37,12 @@ describe('the server shell', () => {
     expect(response.headers['x-powered-by']).toBeUndefined();
   });
 
-  it('serves the exported web app, and index.html for deep links', async () => {
-    const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ritorno-web-'));
-    fs.writeFileSync(path.join(webDir, 'index.html'), '<!doctype html><title>Ritorno</title>');
-    fs.writeFileSync(path.join(webDir, 'app.js'), 'console.log(1)');
-    const base = createTestContext();
-    const app = createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), storage: memoryStorage(), webDir });
-    expect((await request(app).get('/app.js')).text).toBe('console.log(1)');
-    const deep = await request(app).get('/caseload/some-id');
+  it('serves the exported web app, each screen drawn for a deep link, and the API beside it', async () => {
+    const app = appServing(fakeWebExport());
+    expect((await request(app).get('/_expo/static/js/web/entry-abc123.js')).text).toContain('console.log');
+    const deep = await request(app).get('/musicians/some-id');
     expect(deep.status).toBe(200);
-    expect(deep.text).toContain('<title>Ritorno</title>');
+    expect(deep.text).toContain('<title>page /musicians/some-id</title>');
     expect((await request(app).get('/api/nope')).status).toBe(404);
   });
 });

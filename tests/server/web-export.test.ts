@@ -1,52 +1,25 @@
 import crypto from 'node:crypto';
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import request from 'supertest';
-import { createApp } from '@/server/app';
-import { memoryStorage } from '@/server/lib/storage';
-import { createAccount, createTestContext, PASSWORD } from './support/test-app';
+import { createTestContext, createAccount } from './support/test-app';
+import { musicianWithPlan } from './support/plan-fixture';
+import { appServing, fakeWebExport, readsIn, sessionCookie } from './support/web-export-fixture';
 
 const escape = (text: string) => text.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
+const preload = '<link rel="preload" as="script" href="/_expo/static/js/web/signed-in-screens-def456.js" />';
+const hydrate = '<script>globalThis.__EXPO_ROUTER_HYDRATE__=true;</script>';
 
-const INDEX = '<!doctype html><html><head><title>Ritorno</title></head><body><script src="/_expo/static/js/web/entry-abc123.js" defer></script></body></html>';
-
-function appWithExport({ signedInChunk = true } = {}) {
-  const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ritorno-web-'));
-  fs.writeFileSync(path.join(webDir, 'index.html'), INDEX);
-  fs.writeFileSync(path.join(webDir, 'favicon.ico'), 'icon');
-  fs.mkdirSync(path.join(webDir, '_expo/static/js/web'), { recursive: true });
-  fs.writeFileSync(path.join(webDir, '_expo/static/js/web/entry-abc123.js'), `console.log("${'x'.repeat(4000)}")`);
-  if (signedInChunk) fs.writeFileSync(path.join(webDir, '_expo/static/js/web/signed-in-screens-def456.js'), 'chunk');
-  fs.mkdirSync(path.join(webDir, 'assets/assets/fonts'), { recursive: true });
-  fs.writeFileSync(path.join(webDir, 'assets/assets/fonts/Figtree.abc123.ttf'), 'font');
-  const base = createTestContext();
-  return createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), storage: memoryStorage(), webDir });
-}
-
-describe('the web export', () => {
-  it('does cache hashed scripts and fonts for a year when they are requested', async () => {
-    const app = appWithExport();
+describe('the web export: files', () => {
+  it('does cache hashed scripts and fonts for a year, and the favicon for an hour', async () => {
+    const app = appServing(fakeWebExport());
     for (const url of ['/_expo/static/js/web/entry-abc123.js', '/assets/assets/fonts/Figtree.abc123.ttf']) {
       const response = await request(app).get(url);
-      expect(response.status).toBe(200);
-      expect(response.headers['cache-control']).toBe('public, max-age=31536000, immutable');
-    }
-  });
-
-  it('does make browsers revalidate index.html when it is reached directly or by a deep link', async () => {
-    const app = appWithExport();
-    for (const url of ['/index.html', '/plan/42', '/']) {
-      const response = await request(app).get(url);
-      expect(response.status).toBe(200);
-      expect(response.text).toContain('<title>Ritorno</title>');
-      expect(response.headers['cache-control']).toBe('no-cache');
+      expect([url, response.status, response.headers['cache-control']]).toEqual([url, 200, 'public, max-age=31536000, immutable']);
     }
     expect((await request(app).get('/favicon.ico')).headers['cache-control']).toBe('public, max-age=3600');
   });
 
   it('does compress the script when the browser accepts gzip, and not otherwise', async () => {
-    const app = appWithExport();
+    const app = appServing(fakeWebExport());
     const url = '/_expo/static/js/web/entry-abc123.js';
     const gzipped = await request(app).get(url).set('Accept-Encoding', 'gzip');
     expect(gzipped.headers['content-encoding']).toBe('gzip');
@@ -55,123 +28,136 @@ describe('the web export', () => {
     expect(plain.headers['content-encoding']).toBeUndefined();
   });
 
-  const preload = '<link rel="preload" as="script" href="/_expo/static/js/web/signed-in-screens-def456.js" />';
-
-  it('does name the signed-in chunk as a preload when the visitor holds a session cookie', async () => {
-    const app = appWithExport();
-    for (const cookie of ['better-auth.session_token=abc.def', 'theme=dark; __Secure-better-auth.session_token=abc.def']) {
-      const response = await request(app).get('/home').set('Cookie', cookie);
-      expect(response.status).toBe(200);
-      expect(response.text).toMatch(new RegExp(`${escape(preload)}(<link [^>]+>)*</head>`));
-      expect(response.text).toContain('entry-abc123.js');
-      expect(response.headers.vary).toMatch(/Cookie/);
-      expect(response.headers['cache-control']).toBe('no-cache');
-    }
+  it('does refuse to start on an export that is not server-rendered, saying what to set', () => {
+    expect(() => appServing(fakeWebExport({ rendering: 'none' }))).toThrow(/web\.output "server"/);
   });
+});
 
-  it('does not preload the signed-in chunk when the visitor has no session cookie', async () => {
-    const app = appWithExport();
-    for (const cookie of [undefined, 'better-auth.session_data=abc', 'not-better-auth.session_token_x=1']) {
-      const call = request(app).get('/sign-in');
-      const response = cookie ? await call.set('Cookie', cookie) : await call;
-      expect(response.text).toBe(INDEX);
+describe('the web export: pages drawn on request', () => {
+  it('does draw each route, dynamic segments included, and never lets a cache keep it', async () => {
+    const app = appServing(fakeWebExport());
+    for (const url of ['/', '/sign-in', '/home', '/musicians/m-42', '/musicians/m-42/plan/new', '/mailbox']) {
+      const response = await request(app).get(url);
+      expect([url, response.status]).toEqual([url, 200]);
+      expect(response.text).toContain(`<main>drawn ${url}</main>`);
+      expect(response.text).toContain('<script src="/_expo/static/js/web/entry-abc123.js" defer></script>');
+      expect(response.headers['cache-control']).toBe('private, no-store');
       expect(response.headers.vary).toMatch(/Cookie/);
     }
   });
 
-  it('does preload no script for a signed-in visitor when the export has no signed-in chunk, only the account reads', async () => {
-    const app = appWithExport({ signedInChunk: false });
-    const response = await request(app).get('/home').set('Cookie', 'better-auth.session_token=abc.def');
+  it('does answer an unknown path with the not-found screen and a 404', async () => {
+    const app = appServing(fakeWebExport());
+    for (const url of ['/nowhere', '/musicians/m-42/plan', '/caseload/some-id']) {
+      const response = await request(app).get(url);
+      expect([url, response.status]).toEqual([url, 404]);
+      expect(response.text).toContain(`<main>drawn ${url}</main>`);
+    }
+  });
+
+  it('does draw a page again, waiting for every part, when the first drawing left a part for the browser', async () => {
+    const webDir = fakeWebExport({ unfinishedFirst: true });
+    const app = appServing(webDir);
+    const first = await request(app).get('/home');
+    expect(first.text).toContain('<main>drawn /home</main>');
+    expect(first.text).not.toContain('<!--$!-->');
+    await request(app).get('/plan');
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- the stand-in renderer the server loaded.
+    const renderer = require(`${webDir}/server/_expo/server/render.js`) as { calls: string[] };
+    expect(renderer.calls).toEqual(['static /home', 'streamed /home', 'static /home', 'static /plan']);
+  });
+
+  it('does hydrate a signed-out page, and redraws a signed-in one with the signed-in screens preloaded', async () => {
+    const base = createTestContext();
+    await createAccount(base, 'clinician', 'ines.marlow@clinic.example');
+    const cookie = await sessionCookie(base, 'ines.marlow@clinic.example');
+    const app = appServing(fakeWebExport(), base);
+    const signedIn = await request(app).get('/musicians/m-42').set('Cookie', cookie);
+    expect(signedIn.text).toMatch(new RegExp(`${escape(preload)}</head>`));
+    expect(signedIn.text).not.toContain('__EXPO_ROUTER_HYDRATE__');
+    for (const cookieOrNone of ['better-auth.session_token=gone.gone', undefined]) {
+      const call = request(app).get('/musicians/m-42');
+      const signedOut = cookieOrNone ? await call.set('Cookie', cookieOrNone) : await call;
+      expect(signedOut.text).toMatch(new RegExp(`${escape(hydrate)}</head>`));
+      expect(signedOut.text).not.toContain('rel="preload"');
+      expect(readsIn(signedOut.text)).toBeUndefined();
+    }
+  });
+
+  it('does draw only the signed-in screens without the chunk preload when the export has no such chunk', async () => {
+    const base = createTestContext();
+    await createAccount(base, 'clinician', 'ines.marlow@clinic.example');
+    const cookie = await sessionCookie(base, 'ines.marlow@clinic.example');
+    const response = await request(appServing(fakeWebExport({ signedInChunk: false }), base)).get('/musicians/m-42').set('Cookie', cookie);
+    expect(response.status).toBe(200);
     expect(response.text).not.toContain('as="script"');
-    expect(response.text.replace(/<link rel="preload" as="fetch" href="[^"]+" crossorigin="use-credentials" \/>/g, '')).toBe(INDEX);
   });
-
-  function appWithStaticExport(base = createTestContext()) {
-    const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ritorno-web-'));
-    const pageHtml = (name: string) => `<!doctype html><html><head><title>${name}</title></head><body><script type="module">globalThis.__EXPO_ROUTER_HYDRATE__=true;</script><script src="/_expo/static/js/web/entry-abc123.js" defer></script></body></html>`;
-    for (const file of ['index.html', 'sign-in.html', 'home.html', 'musicians/[id].html', 'musicians/[id]/plan/new.html', 'musicians/[id]/plan/[planId].html', 'mailbox/index.html', 'mailbox/[id].html', '(app)/home.html', '(auth)/sign-in.html', '_sitemap.html', '+not-found.html']) {
-      fs.mkdirSync(path.dirname(path.join(webDir, file)), { recursive: true });
-      fs.writeFileSync(path.join(webDir, file), pageHtml(file));
-    }
-    fs.mkdirSync(path.join(webDir, '_expo/static/js/web'), { recursive: true });
-    fs.writeFileSync(path.join(webDir, '_expo/static/js/web/signed-in-screens-def456.js'), 'chunk');
-    return createApp({ db: base.db, auth: base.auth, mailer: { send: async () => undefined }, env: { PUBLIC_URL: 'http://x', NODE_ENV: 'test' }, now: () => new Date(), storage: memoryStorage(), webDir });
-  }
 
   it('does send someone signed in home from the signed-out screens before any page is drawn, and nobody else', async () => {
     const base = createTestContext();
     await createAccount(base, 'musician', 'hana.okoro@example.test');
-    const signIn = await request(base.app).post('/api/auth/sign-in/email').send({ email: 'hana.okoro@example.test', password: PASSWORD });
-    const cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
-    const app = appWithStaticExport(base);
+    const cookie = await sessionCookie(base, 'hana.okoro@example.test');
+    const app = appServing(fakeWebExport(), base);
     for (const url of ['/sign-in', '/sign-up', '/forgot-password']) {
       const response = await request(app).get(url).set('Cookie', cookie);
       expect([url, response.status, response.headers.location]).toEqual([url, 302, '/']);
       expect(response.headers['cache-control']).toBe('no-store');
     }
-    // Other pages still open for them; a cookie whose session is gone, or none, gets the sign-in page.
     expect((await request(app).get('/home').set('Cookie', cookie)).status).toBe(200);
     for (const other of ['better-auth.session_token=gone.gone', undefined]) {
       const call = request(app).get('/sign-in');
       const response = other ? await call.set('Cookie', other) : await call;
-      expect(response.status).toBe(200);
-      expect(response.text).toContain('<title>sign-in.html</title>');
+      expect([response.status, response.text]).toEqual([200, expect.stringContaining('<main>drawn /sign-in</main>')]);
     }
   });
 
-  it('does answer each route with its pre-rendered page, dynamic segments included, when the export is static', async () => {
-    const app = appWithStaticExport();
-    const expected: Record<string, string> = {
-      '/': 'index.html',
-      '/sign-in': 'sign-in.html',
-      '/home': 'home.html',
-      '/musicians/m-42': 'musicians/[id].html',
-      '/musicians/m-42/plan/new': 'musicians/[id]/plan/new.html',
-      '/musicians/m-42/plan/p-7': 'musicians/[id]/plan/[planId].html',
-      '/mailbox': 'mailbox/index.html',
-      '/mailbox/17': 'mailbox/[id].html',
-    };
-    for (const [url, file] of Object.entries(expected)) {
-      const response = await request(app).get(url);
-      expect([url, response.status, response.text]).toEqual([url, 200, expect.stringContaining(`<title>${file}</title>`)]);
-      expect(response.headers['cache-control']).toBe('no-cache');
-    }
+  it('does allow exactly the inline scripts of each answer by hash in the Content-Security-Policy', async () => {
+    const base = createTestContext();
+    await musicianWithPlan(base, { startDate: '2027-02-22' });
+    const cookie = await sessionCookie(base, 'pia@students.example');
+    const app = appServing(fakeWebExport(), base);
+    const hashOf = (script: string) => `'sha256-${crypto.createHash('sha256').update(script).digest('base64')}'`;
+    const scriptSrc = (policy: unknown) => String(policy).split(';').find((directive) => directive.startsWith('script-src'));
+    const signedOut = await request(app).get('/sign-in');
+    expect(scriptSrc(signedOut.headers['content-security-policy'])).toBe(`script-src 'self' ${hashOf('globalThis.__EXPO_ROUTER_HYDRATE__=true;')}`);
+    const today = await request(app).get('/home').set('Cookie', cookie);
+    const dataScript = /<script id="expo-router-data">([\s\S]*?)<\/script>/.exec(today.text)?.[1] ?? '';
+    expect(dataScript).toContain('__EXPO_ROUTER_LOADER_DATA__');
+    expect(scriptSrc(today.headers['content-security-policy'])).toBe(`script-src 'self' ${hashOf(dataScript)}`);
+    expect(String((await request(app).get('/api/health')).headers['content-security-policy'])).toContain("script-src 'self';");
+  });
+});
+
+describe("the web export: a page carries its first reads, as the API answers them, for its visitor only", () => {
+  it("does carry the account, the day and the musician's summary on a musician's Today", async () => {
+    const base = createTestContext();
+    await musicianWithPlan(base, { startDate: '2027-02-22' });
+    const cookie = await sessionCookie(base, 'pia@students.example');
+    const app = appServing(fakeWebExport(), base);
+    const reads = readsIn((await request(app).get('/home').set('Cookie', cookie)).text);
+    const api = async (path: string) => (await request(app).get(path).set('Cookie', cookie)).body as unknown;
+    expect(reads).toEqual({ '/api/me': await api('/api/me'), '/api/today': await api('/api/today'), '/api/me/musician': await api('/api/me/musician') });
+    // Another page of theirs carries the account alone.
+    expect(readsIn((await request(app).get('/plan').set('Cookie', cookie)).text)).toEqual({ '/api/me': await api('/api/me') });
   });
 
-  it('does answer an unknown path with the not-found page and a 404 when the export is static', async () => {
-    const app = appWithStaticExport();
-    for (const url of ['/nowhere', '/musicians', '/musicians/m-42/plan', '/_sitemap']) {
-      const response = await request(app).get(url);
-      expect([url, response.status]).toEqual([url, 404]);
-      expect(response.text).toContain('<title>+not-found.html</title>');
-    }
+  it('does carry only the account for another role on the same page', async () => {
+    const base = createTestContext();
+    await createAccount(base, 'teacher', 'tomas.reyes@school.example', 'Tomas Reyes');
+    const cookie = await sessionCookie(base, 'tomas.reyes@school.example');
+    const reads = readsIn((await request(appServing(fakeWebExport(), base)).get('/home').set('Cookie', cookie)).text);
+    expect(reads).toEqual({ '/api/me': { id: expect.any(String), name: 'Tomas Reyes', email: 'tomas.reyes@school.example', role: 'teacher' } });
   });
 
-  it('does preload the signed-in chunk on a pre-rendered page when the visitor holds a session cookie', async () => {
-    const app = appWithStaticExport();
-    const signedIn = await request(app).get('/musicians/m-42').set('Cookie', 'better-auth.session_token=abc.def');
-    expect(signedIn.text).toMatch(new RegExp(`${escape(preload)}(<link [^>]+>)*</head>`));
-    expect(signedIn.text).toContain('<title>musicians/[id].html</title>');
-    const signedOut = await request(app).get('/musicians/m-42');
-    expect(signedOut.text).not.toContain('rel="preload"');
-  });
-
-  it("does start a signed-in visitor's first API reads with the page: the account everywhere, the day on Today", async () => {
-    const app = appWithStaticExport();
-    const fetched = (html: string) => [...html.matchAll(/<link rel="preload" as="fetch" href="([^"]+)" crossorigin="use-credentials" \/>/g)].map((m) => m[1]);
-    const cookie = 'better-auth.session_token=abc.def';
-    expect(fetched((await request(app).get('/home').set('Cookie', cookie)).text)).toEqual(['/api/auth/get-session', '/api/me', '/api/today', '/api/me/musician']);
-    expect(fetched((await request(app).get('/musicians/m-42').set('Cookie', cookie)).text)).toEqual(['/api/auth/get-session', '/api/me']);
-    expect(fetched((await request(app).get('/home')).text)).toEqual([]);
-  });
-
-  it('does allow a page its own inline script by hash in the Content-Security-Policy, and no other inline script', async () => {
-    const app = appWithStaticExport();
-    const hash = crypto.createHash('sha256').update('globalThis.__EXPO_ROUTER_HYDRATE__=true;').digest('base64');
-    const response = await request(app).get('/sign-in');
-    const scriptSrc = String(response.headers['content-security-policy']).split(';').find((directive) => directive.startsWith('script-src'));
-    expect(scriptSrc).toBe(`script-src 'self' 'sha256-${hash}'`);
-    const api = await request(app).get('/api/health');
-    expect(String(api.headers['content-security-policy'])).toContain("script-src 'self';");
+  it('does leave out a read the API answers with an error, for the app to ask and show', async () => {
+    const base = createTestContext();
+    // A musician account with no musician record or plan: the API answers the day with 404.
+    await createAccount(base, 'musician', 'noor.haddad@example.test');
+    const cookie = await sessionCookie(base, 'noor.haddad@example.test');
+    const app = appServing(fakeWebExport(), base);
+    expect((await request(app).get('/api/today').set('Cookie', cookie)).status).toBe(404);
+    const page = await request(app).get('/home').set('Cookie', cookie);
+    expect(page.status).toBe(200);
+    expect(Object.keys(readsIn(page.text) ?? {})).toEqual(['/api/me']);
   });
 });
