@@ -1,5 +1,6 @@
 import type { Server } from 'node:http';
 import { createApp } from './app';
+import { isWebExport } from './middleware/web-export';
 import { createAuth } from './auth';
 import { migrateDatabase, openDatabase } from './db/client';
 import { seedDemo } from './db/seed';
@@ -47,6 +48,7 @@ async function main() {
   const summaryJob = startWeeklySummaryJob({ db, mailer, publicUrl: env.PUBLIC_URL, pattern: env.SUMMARY_CRON, timeZone: env.SUMMARY_TIME_ZONE });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     console.log(`\nRitorno is running at ${env.PUBLIC_URL}`);
+    if (!isWebExport(env.WEB_DIR)) console.log(`Web app: no export in ${env.WEB_DIR} (\`npm start\` builds one); serving the API only.`);
     console.log(fakeSmtp ? `Mail: local fake SMTP on port ${fakeSmtp.port}; read it as the admin under Mailbox.` : 'Mail: sent through SMTP_URL.');
     if (seeded) {
       console.log(`\nDemo accounts (password for all: ${seeded.password}):`);
