@@ -24,6 +24,8 @@ try {
     .filter((audit) => audit.score !== null && audit.score < 0.9 && audit.scoreDisplayMode !== 'informative' && audit.scoreDisplayMode !== 'notApplicable')
     .map((audit) => audit.id);
   console.log(JSON.stringify({
+    // Set when Lighthouse could not measure the page (it asks to be run again): the scores are then empty.
+    runtimeError: lhr?.runtimeError?.code,
     performance: Math.round((lhr?.categories.performance?.score ?? 0) * 100),
     accessibility: Math.round((lhr?.categories.accessibility?.score ?? 0) * 100),
     finalUrl: lhr?.finalDisplayedUrl,

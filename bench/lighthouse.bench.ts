@@ -10,15 +10,18 @@ import { verdict, type Bench, type Row } from './harness';
 import { signIn } from './server-control';
 import { MINIMAL_DIST, WORK } from './web.bench';
 
-interface Scores { performance: number; accessibility: number; finalUrl: string; failing: string[]; lcpMs: number; tbtMs: number }
+interface Scores { performance: number; accessibility: number; finalUrl: string; failing: string[]; lcpMs: number; tbtMs: number; runtimeError?: string }
 /** The median run's scores, and every run's performance score. */
 type Median = Scores & { spread: string };
 
 const MINIMAL_PORT = 8171;
 // One Lighthouse run on this machine varies by several points (its own blocking-time figure moves by
 // hundreds of milliseconds from run to run): each page is run this many times and the median reported,
-// as Lighthouse's documentation advises for variability.
-const RUNS = 3;
+// as Lighthouse's documentation advises for variability (it suggests five).
+const RUNS = 5;
+// A run Lighthouse itself reports as failed (a runtime error such as NO_NAVSTART, "run Lighthouse again")
+// has no scores: it is run again, up to this many times, rather than counted as zero.
+const RETRIES = 2;
 
 // Asynchronous: the minimal app is served from this process while Lighthouse loads it.
 const run = promisify(execFile);
@@ -26,10 +29,17 @@ const run = promisify(execFile);
 async function lighthouseOnce(name: string, url: string, cookie?: string): Promise<Scores> {
   const report = path.join(WORK, `lighthouse-${name}.json`);
   const env = { ...process.env, LIGHTHOUSE_REPORT: report };
-  const { stdout: out } = await run(process.execPath, [path.join(__dirname, 'lighthouse-run.mjs'), url, ...(cookie ? [cookie] : [])], { encoding: 'utf8', timeout: 180_000, env });
-  const scores = JSON.parse(out.trim().split('\n').at(-1) ?? '{}') as Scores;
-  console.error(`lighthouse ${name}: ${scores.finalUrl}; below 0.9: ${scores.failing.join(', ')}; report in ${report}`);
-  return scores;
+  for (let attempt = 0; ; attempt++) {
+    const { stdout: out } = await run(process.execPath, [path.join(__dirname, 'lighthouse-run.mjs'), url, ...(cookie ? [cookie] : [])], { encoding: 'utf8', timeout: 180_000, env });
+    const scores = JSON.parse(out.trim().split('\n').at(-1) ?? '{}') as Scores;
+    if (scores.runtimeError && attempt < RETRIES) {
+      console.error(`lighthouse ${name}: run failed (${scores.runtimeError}), running again`);
+      continue;
+    }
+    if (scores.runtimeError) throw new Error(`Lighthouse could not measure ${url}: ${scores.runtimeError}`);
+    console.error(`lighthouse ${name}: ${scores.finalUrl}; below 0.9: ${scores.failing.join(', ')}; report in ${report}`);
+    return scores;
+  }
 }
 
 /** The median run by performance score, with its own paint and blocking-time figures. */
