@@ -18,7 +18,7 @@ if (process.env.EXPO_OS === 'web' && typeof window !== 'undefined') {
   const routeModules = ctx.keys().map((key): [string, Step] => [key, () => ctx(key)]);
   // The page arrives drawn by the server, with the data it was drawn with (server/middleware/web-export.ts).
   // The app draws its own copy in a render React can pause, and swaps it in whole (the server's page is
-  // not hydrated: see DEVELOPERS.md, "Pages drawn by the server"). The copy must be the same page: the
+  // not hydrated: see DEVELOPERS.md, "Taking the page over"). The copy must be the same page: the
   // data goes into the query cache first, and a signed-in page waits for the signed-in screens, or the
   // copy would be the "Opening Ritorno" stand-in.
   const firstReads: Step = () => {

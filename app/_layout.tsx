@@ -15,19 +15,18 @@ import { createQueryClient, queryClient } from '@/lib/query-client';
 // Hold the splash screen until the fonts are in, so text never jumps from one face to another.
 SplashScreen.preventAutoHideAsync().catch(() => undefined);
 
-// On the web, waiting for four font files before the first paint cost seconds on a slow phone
-// connection: there every family is followed by a system stack (constants/theme.ts), text shows at once
-// in it and the face swaps in when it arrives (font-display: swap). Native apps keep the splash hold.
-// The server draws the web pages, and the fonts are asked for only in the browser, once this module
-// runs: registered while the server draws, every page would preload them and they would compete with the
-// app's script on a slow connection. (The icon font: components/ui/icon.tsx.)
+// On the web the four faces are declared in every page the server draws, with preloads (expo-font
+// collects them while the server renders this layout: registered per render, since each render starts
+// afresh). The server's page and the app's copy of it are then drawn in the same faces, and the copy
+// does not land as a larger, later paint. font-display: fallback: text waits at most a moment for its
+// face, then shows in the system stack that follows every family (constants/theme.ts). Native apps keep
+// the splash hold. (The icon font: components/ui/icon.tsx.)
 const onWeb = Platform.OS === 'web';
-if (onWeb && typeof window !== 'undefined') {
-  const webFonts = Object.entries(fontFiles).map(([name, uri]) => [name, { uri, display: FontDisplay.SWAP }]);
-  loadAsync(Object.fromEntries(webFonts)).catch(() => undefined);
-}
+const webFonts = Object.fromEntries(Object.entries(fontFiles).map(([name, uri]) => [name, { uri, display: FontDisplay.FALLBACK }]));
+if (onWeb && typeof window !== 'undefined') loadAsync(webFonts).catch(() => undefined);
 
 export default function RootLayout() {
+  if (onWeb && typeof window === 'undefined') loadAsync(webFonts).catch(() => undefined);
   const [fontsLoaded, fontError] = useFonts(onWeb ? {} : fontFiles);
   const { scheme, colors } = useTheme();
   // The server draws each page for one visitor: a cache of its own per page it draws, never shared, with

@@ -15,9 +15,9 @@ function layoutOf(width: number): Layout {
 }
 
 const windowLayout = () => layoutOf(Dimensions.get('window').width);
-// The server draws the web pages for a phone. While React hydrates such a page it must render
-// the same, so it reads this first and re-renders at once where the screen is wider. The layout, not the
-// width, is what is compared: on a phone nothing re-renders, and resizing within a layout redraws nothing.
+// The server draws the web pages for a phone (this is its snapshot); in the browser the app draws for the
+// real width from its first render. The layout, not the width, is what is compared: resizing within a
+// layout redraws nothing.
 const prerenderedLayout = (): Layout => 'phone';
 
 /** One place that decides the layout: phone first, wider panes from `medium`, side navigation from `wide`. */

@@ -8,7 +8,7 @@ function subscribe(onChange: () => void): () => void {
 }
 
 const systemScheme = () => (Appearance.getColorScheme() === 'dark' ? 'dark' : 'light');
-// The server draws web pages light; hydrating one, React starts from that and then follows the system.
+// The server draws web pages light (this is its snapshot); in the browser the app follows the system.
 const prerenderedScheme = () => 'light' as const;
 
 /** The colour tokens for the system's light or dark appearance. */

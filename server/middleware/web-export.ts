@@ -103,14 +103,6 @@ function oneAtATime() {
 // React's mark for a part of the page it could not draw on the server, left for the browser.
 const UNFINISHED = '<!--$!-->';
 
-// How the app takes a page over (DEVELOPERS.md, "Pages drawn by the server"). A signed-out page (sign-in
-// and the like) is small: the app hydrates it, keeping its elements, and what someone typed before the
-// app started stays typed. A signed-in page is not hydrated: expo-router's navigators update their state
-// as soon as they are in place, which makes React hydrate the rest of the page in one task it cannot
-// pause (hundreds of milliseconds on a slow phone); the app draws its own copy in a render it can pause
-// and swaps it in whole (index.ts). This flag is what asks for hydration.
-const HYDRATE = '<script>globalThis.__EXPO_ROUTER_HYDRATE__=true;</script>';
-
 // Screens with no use to someone signed in: the server sends them home before any page is drawn (the app
 // does the same for its own navigations, app/(auth)/_layout.tsx).
 const SIGNED_OUT_ONLY = new Set(['/sign-in', '/sign-up', '/forgot-password']);
@@ -151,7 +143,9 @@ export function webExport(webDir: string, options: WebExportOptions = {}): Route
         await new Response(stream).text();
         html = await renderer.getStaticContent(url, { assets: manifest.assets, loader });
       }
-      return html.replace('</head>', `${visitor.signedIn ? preload : HYDRATE}</head>`);
+      // Not hydrated: the app draws its own copy and swaps it in (index.ts; DEVELOPERS.md, "Taking the
+      // page over"), so the page carries no hydration flag.
+      return visitor.signedIn && preload ? html.replace('</head>', `${preload}</head>`) : html;
     });
   }
 
